@@ -1,0 +1,207 @@
+// friction.cpp - Darcy friction factors and pressure drop.
+#include "friction_internal.hpp"
+#include "internal.hpp"
+
+#include <boost/math/constants/constants.hpp>
+#include <boost/math/special_functions/lambert_w.hpp>
+
+#include <algorithm>
+#include <cmath>
+
+using th::checked;
+using th::fail;
+using th::guard;
+using th::need;
+using th::need_nonnegative;
+using th::need_out;
+using th::need_positive;
+
+namespace th {
+
+double colebrook(double re, double rr) {
+    // 1/sqrt(f) = -c ln(a + b/sqrt(f)), c = 2/ln 10, a = (eps/D)/3.7,
+    // b = 2.51/Re. With y = a + b/sqrt(f) = b c w the equation becomes
+    // w + ln w = z, z = a/(b c) - ln(b c), i.e. w = W0(e^z) (Lambert W).
+    // Then 1/sqrt(f) = -c ln(b c w): taken in this form, not as c w - a/b,
+    // because the latter cancels catastrophically when a/(b c) is large.
+    const double c = 2.0 / std::log(10.0);
+    const double a = rr / 3.7;
+    const double b = 2.51 / re;
+    const double z = a / (b * c) - std::log(b * c);
+    double w;
+    if (z < 700.0) {
+        // e^z is representable: the closed form through Boost.Math.
+        w = boost::math::lambert_w0(std::exp(z));
+    } else {
+        // e^z would overflow (very rough pipes at very high Re). Solve
+        // w + ln w = z directly in log space: the de Bruijn asymptotic
+        // expansion (error ~ (ln z / z)^5 < 1e-10 for z >= 700), then one
+        // Newton step on g(w) = w + ln w - z, which squares that error.
+        const double l1 = z;
+        const double l2 = std::log(z);
+        w = l1 - l2 + l2 / l1 + l2 * (l2 - 2.0) / (2.0 * l1 * l1) +
+            l2 * (6.0 - 9.0 * l2 + 2.0 * l2 * l2) / (6.0 * l1 * l1 * l1);
+        w -= (w + std::log(w) - z) / (1.0 + 1.0 / w);
+    }
+    const double inv_sqrt_f = -c * std::log(b * c * w);
+    return 1.0 / (inv_sqrt_f * inv_sqrt_f);
+}
+
+double petukhov_f(double re) {
+    const double t = 0.790 * std::log(re) - 1.64;
+    return 1.0 / (t * t);
+}
+
+double friction(int method, double re, double rr, range_check &rc) {
+    switch (method) {
+    case TH_F_AUTO:
+        if (re < TH_RE_LAMINAR_MAX) return friction(TH_F_LAMINAR, re, rr, rc);
+        rc.require(re >= 4000.0, "transitional flow (2300 <= Re < 4000): "
+                                 "friction factor uncertain, Colebrook used");
+        rc.require(rr <= 0.05, "relative roughness above 0.05 (Colebrook range)");
+        return colebrook(re, rr);
+    case TH_F_LAMINAR:  // Hagen-Poiseuille, analytic
+        rc.require(re < TH_RE_LAMINAR_MAX, "laminar 64/Re applied at Re >= 2300");
+        return 64.0 / re;
+    case TH_F_COLEBROOK:
+        rc.require(re >= 4000.0, "Re below 4000 (Colebrook range 4e3..1e8)");
+        rc.require(re <= 1e8, "Re above 1e8 (Colebrook range 4e3..1e8)");
+        rc.require(rr <= 0.05, "relative roughness above 0.05 (Colebrook range)");
+        return colebrook(re, rr);
+    case TH_F_HAALAND: {
+        rc.require(re >= 4000.0, "Re below 4000 (Haaland range 4e3..1e8)");
+        rc.require(re <= 1e8, "Re above 1e8 (Haaland range 4e3..1e8)");
+        rc.require(rr == 0.0 || (rr >= 1e-6 && rr <= 0.05),
+                   "relative roughness outside Haaland range 1e-6..0.05");
+        const double t = -1.8 * std::log10(std::pow(rr / 3.7, 1.11) + 6.9 / re);
+        return 1.0 / (t * t);
+    }
+    case TH_F_SWAMEE_JAIN: {
+        rc.require(re >= 5000.0, "Re below 5000 (Swamee-Jain range 5e3..1e8)");
+        rc.require(re <= 1e8, "Re above 1e8 (Swamee-Jain range 5e3..1e8)");
+        rc.require(rr == 0.0 || (rr >= 1e-6 && rr <= 0.01),
+                   "relative roughness outside Swamee-Jain range 1e-6..1e-2");
+        const double t = std::log10(rr / 3.7 + 5.74 / std::pow(re, 0.9));
+        return 0.25 / (t * t);
+    }
+    case TH_F_CHURCHILL: {
+        rc.require(rr <= 0.05, "relative roughness above 0.05 (Churchill range)");
+        // Evaluated with the powers regrouped so that (A+B)^-1.5 cannot
+        // overflow: A and B are 16th powers of quantities near 1e1..1e4.
+        // A is an even power, so the sign of the logarithm (negative below
+        // Re ~ 7) does not matter: take its magnitude.
+        const double ln_a = 16.0 * std::log(std::fabs(
+            2.457 * std::log(1.0 / (std::pow(7.0 / re, 0.9) + 0.27 * rr))));
+        const double ln_b = 16.0 * std::log(37530.0 / re);
+        const double m = std::max(ln_a, ln_b);
+        const double ln_sum = m + std::log(std::exp(ln_a - m) + std::exp(ln_b - m));
+        const double term2 = std::exp(-1.5 * ln_sum);
+        return 8.0 * std::pow(std::pow(8.0 / re, 12.0) + term2, 1.0 / 12.0);
+    }
+    case TH_F_PETUKHOV:
+        rc.require(re >= 3000.0, "Re below 3000 (Petukhov friction range 3e3..5e6)");
+        rc.require(re <= 5e6, "Re above 5e6 (Petukhov friction range 3e3..5e6)");
+        rc.require(rr == 0.0, "Petukhov friction is for smooth tubes; roughness ignored");
+        return petukhov_f(re);
+    default:
+        fail(TH_ERR_METHOD);
+    }
+}
+
+}  // namespace th
+
+namespace {
+struct method_name {
+    int id;
+    const char *name;
+};
+// First entry per id is the display name; later ones are aliases.
+constexpr method_name friction_names[] = {
+    {TH_F_AUTO, "auto"},
+    {TH_F_LAMINAR, "laminar"},
+    {TH_F_LAMINAR, "Hagen-Poiseuille"},
+    {TH_F_COLEBROOK, "Colebrook"},
+    {TH_F_COLEBROOK, "Colebrook-White"},
+    {TH_F_HAALAND, "Haaland"},
+    {TH_F_SWAMEE_JAIN, "Swamee-Jain"},
+    {TH_F_CHURCHILL, "Churchill"},
+    {TH_F_CHURCHILL, "Churchill 1977"},
+    {TH_F_PETUKHOV, "Petukhov"},
+};
+}  // namespace
+
+extern "C" {
+
+int th_friction_factor(int method, double re, double rel_roughness, double *f) {
+    return guard([&] {
+        need_out(f);
+        if (method < 0 || method >= TH_F_METHOD_COUNT) fail(TH_ERR_METHOD);
+        need_positive(re);
+        need_nonnegative(rel_roughness);
+        need(rel_roughness < 1.0);
+        th::range_check rc;
+        *f = checked(th::friction(method, re, rel_roughness, rc));
+        return rc.status();
+    });
+}
+
+int th_pressure_drop(double f, double length, double d, double rho, double u,
+                     double *dp) {
+    return guard([&] {
+        need_out(dp);
+        need_positive(f);
+        need_nonnegative(length);
+        need_positive(d);
+        need_positive(rho);
+        need_nonnegative(u);
+        *dp = checked(f * (length / d) * rho * u * u / 2.0);
+        return TH_OK;
+    });
+}
+
+int th_pressure_drop_mass_flow(int method, double mdot, double d, double length,
+                               double rel_roughness, double rho, double mu,
+                               double *f, double *dp) {
+    return guard([&] {
+        need_out(dp);
+        if (method < 0 || method >= TH_F_METHOD_COUNT) fail(TH_ERR_METHOD);
+        need_positive(mdot);
+        need_positive(d);
+        need_nonnegative(length);
+        need_nonnegative(rel_roughness);
+        need(rel_roughness < 1.0);
+        need_positive(rho);
+        need_positive(mu);
+        constexpr double pi = boost::math::constants::pi<double>();
+        const double area = pi * d * d / 4.0;
+        const double u = mdot / (rho * area);
+        const double re = rho * u * d / mu;
+        th::range_check rc;
+        const double ff = checked(th::friction(method, re, rel_roughness, rc));
+        const double p = checked(ff * (length / d) * rho * u * u / 2.0);
+        if (f) *f = ff;
+        *dp = p;
+        return rc.status();
+    });
+}
+
+int th_friction_method_from_name(const char *name, int *method) {
+    return guard([&] {
+        need_out(method);
+        need(name != nullptr);
+        for (const auto &m : friction_names)
+            if (th::name_matches(name, m.name)) {
+                *method = m.id;
+                return TH_OK;
+            }
+        th::fail(TH_ERR_METHOD);
+    });
+}
+
+const char *th_friction_method_name(int method) {
+    for (const auto &m : friction_names)
+        if (m.id == method) return m.name;
+    return nullptr;
+}
+
+}  // extern "C"

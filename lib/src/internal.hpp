@@ -1,0 +1,95 @@
+// internal.hpp - shared plumbing behind the C API: the exception fence,
+// argument checks and the validity-range bookkeeping. Not installed.
+#ifndef TUBEHEAT_INTERNAL_HPP
+#define TUBEHEAT_INTERNAL_HPP
+
+#include "tubeheat.h"
+
+#include <boost/math/policies/error_handling.hpp>
+
+#include <cmath>
+#include <exception>
+#include <new>
+#include <stdexcept>
+
+namespace th {
+
+// Thrown inside the library to leave with a given status; converted back to
+// the status code by guard(). Never crosses the C ABI.
+struct status_error {
+    int status;
+};
+
+[[noreturn]] inline void fail(int status) { throw status_error{status}; }
+
+// Every C entry point runs its body through guard(): whatever is thrown
+// inside (our status_error, a Boost.Math policy error, bad_alloc) becomes a
+// status code, so no exception crosses the ABI. Boost.Math is used with its
+// default throw-on-error policy on purpose: an error cannot then be hidden as
+// a plain number, and this fence turns it into an explicit code.
+template <class Body>
+int guard(Body &&body) noexcept {
+    try {
+        return body();
+    } catch (const status_error &e) {
+        return e.status;
+    } catch (const boost::math::evaluation_error &) {
+        return TH_ERR_NO_CONVERGENCE;
+    } catch (const std::domain_error &) {
+        return TH_ERR_INPUT;
+    } catch (const std::overflow_error &) {
+        return TH_ERR_INTERNAL;
+    } catch (const std::bad_alloc &) {
+        return TH_ERR_INTERNAL;
+    } catch (...) {
+        return TH_ERR_INTERNAL;
+    }
+}
+
+// ---- argument checks (throw status_error{TH_ERR_INPUT}) -------------------
+inline void need(bool ok) {
+    if (!ok) fail(TH_ERR_INPUT);
+}
+template <class T>
+inline void need_out(T *p) {
+    if (p == nullptr) fail(TH_ERR_INPUT);
+}
+inline bool finite(double x) { return std::isfinite(x); }
+inline void need_positive(double x) { need(finite(x) && x > 0.0); }
+inline void need_nonnegative(double x) { need(finite(x) && x >= 0.0); }
+inline void need_finite(double x) { need(finite(x)); }
+// Positive, or +infinity (used for "fully developed" lengths).
+inline void need_positive_or_inf(double x) { need(!std::isnan(x) && x > 0.0); }
+inline void need_temperature(double t) { need(finite(t) && t > 0.0); }
+
+// A result about to be written with a success code must be finite; if the
+// arithmetic produced NaN/inf, report it instead of writing it.
+inline double checked(double x) {
+    if (!std::isfinite(x)) fail(TH_ERR_INTERNAL);
+    return x;
+}
+
+// Collects validity-range violations while a method is evaluated. The first
+// violated limit is kept as a static text for the caller.
+class range_check {
+  public:
+    // Record `note` when `within` is false.
+    void require(bool within, const char *note) {
+        if (!within && note_ == nullptr) note_ = note;
+    }
+    bool ok() const { return note_ == nullptr; }
+    int status() const { return ok() ? TH_OK : TH_WARN_RANGE; }
+    const char *note() const { return note_ ? note_ : ""; }
+
+  private:
+    const char *note_ = nullptr;
+};
+
+// Case-insensitive comparison that treats '-', '_', ' ' and '.' as equal
+// and ignores them, so "Dittus-Boelter", "dittus_boelter" and
+// "DittusBoelter" all match.
+bool name_matches(const char *given, const char *canonical) noexcept;
+
+}  // namespace th
+
+#endif

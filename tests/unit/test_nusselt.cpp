@@ -1,0 +1,267 @@
+// Nusselt correlations: a second transcription of the published formulas,
+// analytic limits, published agreement statements, regime borders, the
+// automatic choice and bad input.
+#include "th_test.hpp"
+
+#include <cmath>
+#include <cstring>
+#include <limits>
+
+using th_test::read_table;
+using th_test::record;
+using th_test::rel_err;
+
+namespace {
+th_conditions base(double re, double pr) {
+    th_conditions c;
+    REQUIRE(th_conditions_init(&c) == TH_OK);
+    c.re = re;
+    c.pr = pr;
+    return c;
+}
+double nu_of(int method, const th_conditions &c, int *status = nullptr) {
+    th_nusselt_result r{};
+    const int s = th_nusselt(method, &c, &r);
+    if (status) *status = s;
+    REQUIRE(th_test::success(s));
+    REQUIRE(std::isfinite(r.nu));
+    return r.nu;
+}
+}  // namespace
+
+TEST_CASE("nusselt: closed forms match an independent transcription", "[nusselt][reference]") {
+    // Source: tests/reference/nusselt_formulas.csv, the published formulas
+    // (Dittus-Boelter 1930, Sieder-Tate 1936, Petukhov 1970, Gnielinski 1976
+    // and 2013, Hausen 1943, Gnielinski laminar composites, Skupinski 1965,
+    // Seban-Shimazaki 1951) transcribed a second time in Python with
+    // python3-fluids for Colebrook.
+    const auto t = read_table("nusselt_formulas.csv");
+    double worst = 0.0;
+    for (const auto &r : t.rows) {
+        th_conditions c = base(r[t.col("re")], r[t.col("pr")]);
+        const double ld = r[t.col("l_over_d")];
+        c.l_over_d = ld == 0.0 ? std::numeric_limits<double>::infinity() : ld;
+        c.averaging = static_cast<int>(r[t.col("averaging")]);
+        c.wall = static_cast<int>(r[t.col("wall")]);
+        c.direction = static_cast<int>(r[t.col("direction")]);
+        c.entry = static_cast<int>(r[t.col("entry")]);
+        c.rel_roughness = r[t.col("rel_roughness")];
+        const int method = static_cast<int>(r[t.col("method")]);
+        th_nusselt_result res{};
+        const int s = th_nusselt(method, &c, &res);
+        INFO("method " << method << " Re " << c.re << " Pr " << c.pr << " L/D " << c.l_over_d);
+        REQUIRE(th_test::success(s));
+        CHECK(res.method == method);
+        const double e = rel_err(res.nu, r[t.col("nu")]);
+        CHECK(e < 1e-12);
+        worst = std::max(worst, e);
+    }
+    record("closed-form Nusselt correlations (276 points, 10 methods)",
+           "second transcription of the published formulas (tests/reference/nusselt_formulas.csv)", worst, 1e-12);
+}
+
+TEST_CASE("nusselt: laminar fully developed analytic values", "[nusselt][analytic]") {
+    // Source: analytic (Graetz limit 3.6568; 48/11), Shah & London (1978).
+    th_conditions c = base(1000.0, 5.0);
+    c.wall = TH_WALL_T;
+    CHECK(nu_of(TH_NU_LAMINAR_DEVELOPED, c) == Approx(3.6568).epsilon(2e-5));
+    c.wall = TH_WALL_H;
+    CHECK(nu_of(TH_NU_LAMINAR_DEVELOPED, c) == Approx(48.0 / 11.0).epsilon(1e-15));
+}
+
+TEST_CASE("nusselt: entry-region fits tend to the developed and Leveque limits", "[nusselt][analytic]") {
+    // Source: analytic limits. As L/D -> infinity the mean composites and
+    // Hausen tend to the developed value (VDI gives 3.66 and 4.354); as
+    // L -> 0 the thermal-entry composite tends to the Leveque mean
+    // 1.615 x*^(-1/3) (analytic Leveque solution, 1.6151).
+    th_conditions c = base(1000.0, 10.0);
+    c.entry = TH_ENTRY_THERMAL;
+    c.l_over_d = 1e12;
+    CHECK(nu_of(TH_NU_HAUSEN, c) == Approx(3.66).epsilon(1e-6));
+    CHECK(nu_of(TH_NU_GNIELINSKI_LAMINAR, c) == Approx(3.66).epsilon(1e-3));
+    c.wall = TH_WALL_H;
+    CHECK(nu_of(TH_NU_GNIELINSKI_LAMINAR, c) == Approx(4.354).epsilon(1e-3));
+    c.wall = TH_WALL_T;
+    c.l_over_d = 1e-5;  // x* = 1e-9
+    const double lev = 1.615 * std::cbrt(1.0 / 1e-9);
+    CHECK(nu_of(TH_NU_GNIELINSKI_LAMINAR, c) == Approx(lev).epsilon(2e-3));
+    CHECK(nu_of(TH_NU_SHAH, c) == Approx(lev).epsilon(2e-3));
+}
+
+TEST_CASE("nusselt: Gnielinski agrees with Petukhov as published", "[nusselt][reference]") {
+    // Source: Gnielinski (1976) built his form on Petukhov's; with their
+    // stated accuracies (Petukhov about 5-6 %, Gnielinski about 10 %; from
+    // memory) the two must agree within 10 % over 1e4..5e6. Measured worst:
+    // 9.9 % at Re 1e4, Pr 1000, where the (Re - 1000) term matters most.
+    double worst = 0.0;
+    for (double re = 1e4; re <= 5e6; re *= 3.0)
+        for (double pr : {0.7, 3.0, 10.0, 100.0, 1000.0}) {
+            th_conditions c = base(re, pr);
+            worst = std::max(worst, rel_err(nu_of(TH_NU_GNIELINSKI, c), nu_of(TH_NU_PETUKHOV, c)));
+        }
+    CHECK(worst < 0.10);
+    record("Gnielinski vs Petukhov, Re 1e4..5e6, Pr 0.7..1000", "stated accuracies of the two forms (from memory)", worst, 0.10);
+}
+
+TEST_CASE("nusselt: Dittus-Boelter within its published scatter of Gnielinski", "[nusselt][reference]") {
+    // Source: Dittus-Boelter carries about +-25 % scatter against data
+    // (common practice); inside its range it must stay within that band of
+    // Gnielinski (+-10 %).
+    double worst = 0.0;
+    for (double re = 1e4; re <= 1e6; re *= 2.0)
+        for (double pr : {0.7, 2.0, 7.0, 50.0}) {
+            th_conditions c = base(re, pr);
+            worst = std::max(worst, rel_err(nu_of(TH_NU_DITTUS_BOELTER, c), nu_of(TH_NU_GNIELINSKI, c)));
+        }
+    CHECK(worst < 0.35);
+    record("Dittus-Boelter vs Gnielinski, Re 1e4..1e6, Pr 0.7..50", "combined scatter bands (common practice)", worst, 0.35);
+}
+
+TEST_CASE("nusselt: heating vs cooling exponent for Dittus-Boelter", "[nusselt][analytic]") {
+    // Source: Dittus-Boelter as usually quoted, n = 0.4 heating, 0.3 cooling.
+    th_conditions c = base(5e4, 4.0);
+    const double heat = nu_of(TH_NU_DITTUS_BOELTER, c);
+    c.direction = TH_COOLING;
+    const double cool = nu_of(TH_NU_DITTUS_BOELTER, c);
+    CHECK(heat / cool == Approx(std::pow(4.0, 0.1)).epsilon(1e-14));
+}
+
+TEST_CASE("nusselt: viscosity and property corrections", "[nusselt][analytic]") {
+    // Source: Sieder-Tate (mu/mu_s)^0.14; Gnielinski K = (Pr/Pr_w)^0.11 for
+    // liquids and (T_b/T_w)^0.45 for heated gases (VDI Heat Atlas, from memory).
+    th_conditions c = base(5e4, 20.0);
+    const double st1 = nu_of(TH_NU_SIEDER_TATE, c);
+    c.mu_ratio = 3.0;
+    CHECK(nu_of(TH_NU_SIEDER_TATE, c) / st1 == Approx(std::pow(3.0, 0.14)).epsilon(1e-14));
+    th_conditions g = base(5e4, 20.0);
+    const double g0 = nu_of(TH_NU_GNIELINSKI, g);
+    g.correction = TH_CORR_LIQUID;
+    g.pr_wall = 10.0;
+    CHECK(nu_of(TH_NU_GNIELINSKI, g) / g0 == Approx(std::pow(2.0, 0.11)).epsilon(1e-14));
+    g.correction = TH_CORR_GAS;
+    g.t_ratio = 0.8;
+    CHECK(nu_of(TH_NU_GNIELINSKI, g) / g0 == Approx(std::pow(0.8, 0.45)).epsilon(1e-14));
+    g.t_ratio = 1.2;  // cooled gas: no correction
+    CHECK(nu_of(TH_NU_GNIELINSKI, g) == Approx(g0).epsilon(1e-15));
+}
+
+TEST_CASE("nusselt: Gnielinski 2013 transition is continuous at both ends", "[nusselt][analytic]") {
+    // Source: construction of the interpolation (Gnielinski 2013): equal to
+    // the laminar composite at Re 2300 and to Gnielinski 1976 at Re 1e4.
+    th_conditions c = base(2300.0, 5.0);
+    c.l_over_d = 50.0;
+    const double lam = nu_of(TH_NU_GNIELINSKI_LAMINAR, c);
+    CHECK(nu_of(TH_NU_GNIELINSKI_TRANSITION, c) == Approx(lam).epsilon(1e-14));
+    c.re = 1e4;
+    CHECK(nu_of(TH_NU_GNIELINSKI_TRANSITION, c) == Approx(nu_of(TH_NU_GNIELINSKI, c)).epsilon(1e-14));
+}
+
+TEST_CASE("nusselt: automatic choice across the regime borders", "[nusselt][auto]") {
+    // Source: thresholds of common practice, Re 2300 and 1e4 (tubeheat.h).
+    th_nusselt_result r{};
+    th_conditions c = base(2299.0, 5.0);
+    REQUIRE(th_test::success(th_nusselt(TH_NU_AUTO, &c, &r)));
+    CHECK(r.method == TH_NU_LAMINAR_DEVELOPED);
+    CHECK(std::strlen(r.reason) > 0);
+    c.re = 2300.0;
+    c.l_over_d = 60.0;
+    REQUIRE(th_test::success(th_nusselt(TH_NU_AUTO, &c, &r)));
+    CHECK(r.method == TH_NU_GNIELINSKI_TRANSITION);
+    c.re = 1e4;
+    REQUIRE(th_test::success(th_nusselt(TH_NU_AUTO, &c, &r)));
+    CHECK(r.method == TH_NU_GNIELINSKI);
+    // Mean transitional value is continuous into the turbulent branch at
+    // Re 1e4 (both are Gnielinski there).
+    th_nusselt_result below{};
+    c.re = 1e4 * (1 - 1e-12);
+    REQUIRE(th_test::success(th_nusselt(TH_NU_AUTO, &c, &below)));
+    CHECK(below.nu == Approx(r.nu).epsilon(1e-9));
+    c.pr = 0.005;
+    c.re = 1e5;
+    REQUIRE(th_test::success(th_nusselt(TH_NU_AUTO, &c, &r)));
+    CHECK(r.method == TH_NU_LIQUID_METAL);
+    CHECK(std::string(r.method_name).find("Seban") != std::string::npos);
+    c.pr = 5000.0;
+    REQUIRE(th_test::success(th_nusselt(TH_NU_AUTO, &c, &r)));
+    CHECK(r.method == TH_NU_SIEDER_TATE);
+}
+
+TEST_CASE("nusselt: range warnings name the violated limit", "[nusselt][range]") {
+    // Source: published validity ranges (tubeheat.h, docs/methods-*.md).
+    th_nusselt_result r{};
+    th_conditions c = base(5000.0, 5.0);
+    CHECK(th_nusselt(TH_NU_DITTUS_BOELTER, &c, &r) == TH_WARN_RANGE);
+    CHECK(std::string(r.range_note).find("1e4") != std::string::npos);
+    CHECK(r.nu > 0.0);
+    c = base(5e4, 500.0);
+    CHECK(th_nusselt(TH_NU_DITTUS_BOELTER, &c, &r) == TH_WARN_RANGE);
+    c = base(5e4, 5.0);
+    CHECK(th_nusselt(TH_NU_DITTUS_BOELTER, &c, &r) == TH_OK);
+    CHECK(std::string(r.range_note).empty());
+    c.l_over_d = 5.0;
+    CHECK(th_nusselt(TH_NU_DITTUS_BOELTER, &c, &r) == TH_WARN_RANGE);
+    c = base(1e4, 5.0);
+    CHECK(th_nusselt(TH_NU_LAMINAR_DEVELOPED, &c, &r) == TH_WARN_RANGE);
+    c = base(2000.0, 5.0);
+    c.l_over_d = 1000.0;
+    c.pr = 1e5;
+    CHECK(th_nusselt(TH_NU_SIEDER_TATE_LAMINAR, &c, &r) == TH_WARN_RANGE);
+}
+
+TEST_CASE("nusselt: bad input and inconsistent requests", "[nusselt][input]") {
+    const double nan = std::numeric_limits<double>::quiet_NaN();
+    th_nusselt_result r{};
+    r.nu = -7.0;
+    for (int m = 0; m < TH_NU_METHOD_COUNT; ++m) {
+        th_conditions c = base(5e4, 5.0);
+        c.re = 0.0;
+        CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
+        c = base(5e4, nan);
+        CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
+        c = base(5e4, 5.0);
+        c.l_over_d = -1.0;
+        CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
+        c = base(5e4, 5.0);
+        c.mu_ratio = 0.0;  // an empty spreadsheet cell: not a default
+        CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
+        c = base(5e4, 5.0);
+        c.wall = 7;
+        CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
+        c = base(5e4, 5.0);
+        c.correction = TH_CORR_LIQUID;  // pr_wall left at 0
+        CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
+        CHECK(th_nusselt(m, nullptr, &r) == TH_ERR_INPUT);
+        c = base(5e4, 5.0);
+        CHECK(th_nusselt(m, &c, nullptr) == TH_ERR_INPUT);
+    }
+    CHECK(r.nu == -7.0);
+    th_conditions c = base(5e4, 5.0);
+    CHECK(th_nusselt(TH_NU_METHOD_COUNT, &c, &r) == TH_ERR_METHOD);
+    CHECK(th_nusselt(-3, &c, &r) == TH_ERR_METHOD);
+    // Mean-only methods refuse a local request.
+    c = base(1000.0, 5.0);
+    c.l_over_d = 20.0;
+    c.averaging = TH_LOCAL;
+    CHECK(th_nusselt(TH_NU_HAUSEN, &c, &r) == TH_ERR_INPUT);
+    CHECK(th_nusselt(TH_NU_GNIELINSKI_LAMINAR, &c, &r) == TH_ERR_INPUT);
+    // Gnielinski below Re 1000 has no positive value.
+    c = base(800.0, 5.0);
+    CHECK(th_nusselt(TH_NU_GNIELINSKI, &c, &r) == TH_ERR_INPUT);
+}
+
+TEST_CASE("nusselt: method names round-trip", "[nusselt][names]") {
+    // Source: published method names.
+    int m = -1;
+    CHECK(th_nusselt_method_from_name("dittus boelter", &m) == TH_OK);
+    CHECK(m == TH_NU_DITTUS_BOELTER);
+    CHECK(th_nusselt_method_from_name("GNIELINSKI-2013", &m) == TH_OK);
+    CHECK(m == TH_NU_GNIELINSKI_TRANSITION);
+    CHECK(th_nusselt_method_from_name("nonsense", &m) == TH_ERR_METHOD);
+    for (int i = 0; i < TH_NU_METHOD_COUNT; ++i) {
+        const char *n = th_nusselt_method_name(i);
+        REQUIRE(n != nullptr);
+        int back = -1;
+        CHECK(th_nusselt_method_from_name(n, &back) == TH_OK);
+        CHECK(back == i);
+    }
+}
