@@ -458,10 +458,9 @@ TH_API int th_length_for_outlet_flux(double t_in, double t_target,
  * TH_ERR_STATE. Viscosity, conductivity, Prandtl number and th_water_props
  * return TH_WARN_RANGE for 273.15 K <= t < 273.16 K, where the transport
  * releases (which start at the triple point) are extrapolated by 0.01 K.
- * Agreement with the releases' verification tables is within 1e-8
- * relative; see docs/properties.md for the stated uncertainties of the
- * formulations (about 1 % for viscosity, 1.5-2 % for conductivity in the
- * liquid).
+ * The code reproduces every verification value printed in these releases
+ * for this range; the uncertainty of the formulations themselves (a few
+ * tenths of a percent to a few percent) is in docs/properties.md.
  *
  * Dry air: ideal gas (rho = p/(R t), R = 287.117 J/(kg K)) with the ideal-
  * gas cp and h of Lemmon et al. (2000) and the dilute-gas viscosity and
@@ -470,8 +469,8 @@ TH_API int th_length_for_outlet_flux(double t_in, double t_target,
  *     in range (TH_OK):          200 K <= t <= 2000 K and p <= 0.2 MPa
  *                                (within 1 % of the full formulations);
  *     extrapolated (TH_WARN_RANGE): 150 K <= t < 200 K, 2000 K < t <=
- *                                3000 K, or 0.2 MPa < p <= 1 MPa (up to
- *                                about 10 % off at 150 K and 1 MPa);
+ *                                3000 K, or 0.2 MPa < p <= 1 MPa (cp up
+ *                                to about 10 % off at 150 K and 1 MPa);
  *     TH_ERR_STATE:              t < 150 K, t > 3000 K or p > 1 MPa.
  * ---------------------------------------------------------------------- */
 
@@ -521,8 +520,450 @@ TH_API int th_air_conductivity(double t, double p, double *k); /* W/(m K) */
 TH_API int th_air_prandtl(double t, double p, double *pr);           /* - */
 
 /* @@SECTION entry-region@@ */
+/* ------------------------------------------------------------------------
+ * Laminar entry region, computed exactly, and laminar ducts
+ *       (lib/src/laminar_entry_series.cpp, laminar_entry_march.cpp,
+ *        laminar_entry_api.cpp, ducts.cpp; method notes in
+ *        docs/laminar-entry.md)
+ *
+ * Two different entry problems; each function names the one it solves:
+ *   THERMAL ENTRY   the velocity profile is already fully developed
+ *                   (parabolic) where heating starts: a tube with an
+ *                   unheated starting length, or very viscous fluids
+ *                   (Pr >~ 100, where the flow develops long before the
+ *                   temperature). Exact series solution.
+ *   COMBINED ENTRY  velocity and temperature are both uniform at the tube
+ *                   inlet and develop together (gases, water). Numerical
+ *                   (boundary-layer) solution for the given Pr.
+ * Circular tube, laminar, constant properties, no axial conduction (fails
+ * for Pe = Re Pr below ~100) and no natural convection.
+ *   x* = x / (D Re Pr) measured from the start of heating (> 0; INFINITY
+ *        means fully developed); x+ = x / (D Re) from the tube inlet.
+ *   Nusselt numbers are based on D. wall is th_wall_condition; averaging
+ *   is th_averaging:
+ *     TH_LOCAL  Nu_x = h(x) D / k with h(x) = q''(x) / (T_w(x) - T_b(x))
+ *     TH_MEAN   Nu_m = (1/x*) * integral of Nu_x over 0..x*, i.e. the mean
+ *               of h over the heated length. For TH_WALL_T this is the
+ *               usual log-mean definition, Nu_m = ln(1/theta_b)/(4 x*)
+ *               (q = h_m A dT_lm). For TH_WALL_H it is the mean of h as
+ *               tabulated by Shah & London (1978); it is NOT q''/(mean of
+ *               T_w - T_b). For wall temperatures under uniform flux use
+ *               TH_LOCAL at the point of interest.
+ * Fully developed limits: Nu_T = 3.6568, Nu_H = 48/11 = 4.3636.
+ * --------------------------------------------------------------------- */
+
+/* THERMAL ENTRY, exact: Graetz series (T) and Siegel-Sparrow-Hallman
+ * series (H) with eigenvalues computed from Kummer's function, and the
+ * extended Leveque expansion below x* = 1e-6 (blended, continuous).
+ * Accurate to about 1e-5 relative for every x* > 0. Cost: ~0.2-2 us for
+ * x* >= 1e-5 (local), ~0.1 s once per wall condition on first use (the
+ * eigenvalue table), then thread-safe and read-only. */
+TH_API int th_thermal_entry_nusselt(double x_star, int wall, int averaging,
+                                    double *nu);
+
+/* COMBINED ENTRY, numerical: Nu for Prandtl number pr > 0 (validated for
+ * 0.5 <= pr <= 1e4; TH_WARN_RANGE outside, and for x* < 1e-7 where the
+ * value is a power-law extrapolation). Accuracy about 0.1-0.3 % against
+ * the converged solution (docs/laminar-entry.md). Cost: the first call
+ * for a new (pr, wall) marches the equations (~10-30 ms); the table is then
+ * kept in a mutex-protected cache of 16 (pr, wall) pairs and later calls
+ * take well under a microsecond. x_star = INFINITY gives the exact fully
+ * developed value. */
+TH_API int th_combined_entry_nusselt(double x_star, double pr, int wall,
+                                     int averaging, double *nu);
+
+/* The marching solver run afresh (no cache) with a chosen radial
+ * resolution (cells, 20..5000; default 200) and axial step growth
+ * (x_{n+1} = (1 + growth) x_n, 0.001..0.5; default 0.02), for convergence
+ * studies and checks; milliseconds to seconds per call. entry is
+ * th_entry_kind: TH_ENTRY_COMBINED marches the combined entry as above;
+ * TH_ENTRY_THERMAL marches the thermal entry (parabolic velocity from the
+ * start), which the exact series solves, so the solver can be checked. */
+TH_API int th_entry_march_study(int entry, double x_star, double pr, int wall,
+                                int averaging, int cells, double growth,
+                                double *nu);
+
+/* HYDRODYNAMIC ENTRY from a uniform inlet velocity (the flow part of the
+ * combined entry): apparent Darcy friction factor times Re,
+ * (f_app Re) = 2 (p_in - p(x)) / (rho u_m^2) / (x/D) / Re, so that the
+ * pressure drop from the inlet to x is dp = f_app (x/D) rho u_m^2 / 2
+ * (it includes the momentum change and the extra wall shear of the
+ * developing profile). x_plus = x/(D Re) > 0; INFINITY gives 64.
+ * Fanning = Darcy/4. TH_WARN_RANGE below x+ = 1e-8 (extrapolated). */
+TH_API int th_combined_entry_friction(double x_plus, double *f_re_app);
+
+/* Eigenvalue n >= 0 and series coefficient used by
+ * th_thermal_entry_nusselt, for inspection:
+ *   TH_WALL_T: lambda_n and G_n (Shah & London 1978 notation):
+ *     Nu_x = sum G_n e^{-2 lambda_n^2 x*} / (2 sum (G_n/lambda_n^2) e^{...});
+ *     lambda_0 = 2.70436, G_0 = 0.74877.
+ *   TH_WALL_H: beta_n (n = 0 is the first non-zero root, 5.06751) and
+ *     c_n = 1/(2 A_n beta_n^4) in the notation of Siegel, Sparrow &
+ *     Hallman: Nu_x = 1/(11/48 - sum c_n e^{-2 beta_n^2 x*}).
+ * Pairs n < 120 are computed from Kummer's function; 120 <= n < 1200 come
+ * from the large-n asymptotic forms (fitted corrections); n >= 1200 is
+ * TH_ERR_INPUT. */
+TH_API int th_graetz_eigen(int wall, int n, double *lambda, double *coef);
+
+/* Laminar fully developed values of a duct (th_duct_shape; duct_ratio as
+ * described there) on the hydraulic diameter: Darcy f Re, Nu_T and Nu_H
+ * (for the rectangle Nu_H1: axially uniform flux, peripherally uniform
+ * wall temperature). Any output pointer may be NULL (at least one must be
+ * given). Circle: 64, 3.6568, 4.3636 (ratio ignored). Rectangle: Shah &
+ * London (1978) fits, 0 < ratio <= 1. Parallel plates, both heated: 96,
+ * 7.5407, 8.2353 (ratio ignored). Annulus, inner wall heated and outer
+ * insulated: handbook table (Lundberg, Reynolds & Kays 1963), ratio =
+ * d_inner/d_outer in (0, 1]; TH_WARN_RANGE below 0.05 (extrapolated). */
+TH_API int th_duct_laminar(int shape, double ratio, double *f_re,
+                           double *nu_t, double *nu_h);
+
+/* Concentric annulus with either wall heated and the other insulated. */
+typedef enum th_annulus_wall {
+    TH_ANNULUS_INNER_HEATED = 0,  /* inner tube heated, shell insulated */
+    TH_ANNULUS_OUTER_HEATED = 1   /* shell heated, inner tube insulated */
+} th_annulus_wall;
+/* Darcy f Re (exact laminar solution), Nu_T and Nu_H on D_h = d_outer -
+ * d_inner, ratio = d_inner/d_outer in (0, 1]. Inner heated: TH_WARN_RANGE
+ * below ratio 0.05 (Nu grows without bound as the inner tube thins; the
+ * value is an extrapolation). NULL outputs are skipped. */
+TH_API int th_annulus_laminar(double ratio, int heated_wall, double *f_re,
+                              double *nu_t, double *nu_h);
+
 
 /* @@SECTION tube-solve@@ */
+/* ------------------------------------------------------------------------
+ * Whole-tube answers      (lib/src/tube_fluid.cpp, tube_model.cpp,
+ *                          tube_solve.cpp, tube_inverse.cpp,
+ *                          tube_report.cpp; docs/tube-solve.md)
+ *
+ * One call takes a fluid, an inlet state, a flow, a geometry and a wall
+ * condition and returns the outlet temperature, the heat rate, the mean
+ * coefficient, the pressure drop and the wall temperatures, with the
+ * Nusselt method used and why. Internally it uses th_nusselt(),
+ * th_friction_factor() and the property functions above.
+ *
+ * Two ways to solve (th_tube_options.segments):
+ *   one-shot (segments = 0, default): properties at the mean bulk
+ *     temperature (t_in + t_out)/2, one mean coefficient over 0..L;
+ *   marching (segments = N >= 1): N equal segments, each with properties
+ *     at its own mean bulk temperature and the coefficient of that segment
+ *     from the mean Nusselt number over 0..x (entry effects included):
+ *         h_seg = (x_b h_mean(0..x_b) - x_a h_mean(0..x_a)) / (x_b - x_a).
+ *   With constant properties and a uniform wall temperature or flux the two
+ *   agree exactly; with an outside fluid they differ where h varies along
+ *   the tube (the marched answer is then the better one).
+ *
+ * Iteration: t_out (and, per segment, the segment outlet) is the root of
+ * G(t) - t, G being the outlet computed with properties at the mean of
+ * inlet and t; bracketed between the inlet and the limiting temperature
+ * (wall or outside fluid) and solved by toms748 (Boost.Math) until the
+ * bracket is narrower than options.tolerance (default 1e-9 K). The wall
+ * temperature used for the viscosity ratio and the Gnielinski property
+ * correction is iterated inside each evaluation (Steffensen) to
+ * tolerance/10. A result whose residual |G(t_out) - t_out| exceeds
+ * 10 x tolerance is not written: TH_ERR_NO_CONVERGENCE (this is also what
+ * happens when an automatic method choice jumps between two correlations
+ * at the answer; choose the method then).
+ *
+ * Energy balance: q = mdot (h(t_out) - h(t_in)) with the fluid's specific
+ * enthalpy (water IF97, air ideal gas, user fluids the integral of the
+ * piecewise-linear cp); the exponential relations use the mean heat
+ * capacity cp_mean = (h(t_out) - h(t_in)) / (t_out - t_in), so the
+ * balance q = UA LMTD closes to the iteration tolerance.
+ *
+ * Properties are evaluated at the inlet pressure throughout; a warning is
+ * given when the pressure drop exceeds 10 % of it (common practice limit
+ * for treating a gas as incompressible). Wall temperatures are those of
+ * the inner surface seen by the fluid (on the fluid side of any fouling).
+ *
+ * Status: TH_OK, or TH_WARN_RANGE when any method, property or
+ * correlation was used outside its range (every note in the result's
+ * notes[]); TH_ERR_INPUT for bad or missing input; TH_ERR_STATE when the
+ * fluid leaves its property range (e.g. water that would boil in the
+ * bulk); TH_ERR_NO_CONVERGENCE; TH_ERR_UNREACHABLE for inverse targets
+ * that no length or flow gives.
+ * --------------------------------------------------------------------- */
+
+/* Fluids. */
+typedef enum th_fluid_kind {
+    TH_FLUID_UNSET = -1, /* th_tube_case_init's value: must be chosen     */
+    TH_FLUID_WATER = 0,  /* liquid water, th_water_props at (T, p_in)     */
+    TH_FLUID_AIR = 1,    /* dry air, th_air_props at (T, p_in)            */
+    TH_FLUID_USER = 2    /* the caller's table below                     */
+} th_fluid_kind;
+
+/* Largest number of points of a user property table. */
+#define TH_FLUID_TABLE_MAX 16
+
+/* A fluid. For TH_FLUID_USER, n points of (t, rho, cp, mu, k):
+ *   n = 1: constant properties (t[0] is ignored);
+ *   n >= 2: t strictly increasing; rho, cp and k interpolated linearly in
+ *   t, mu log-linearly (ln mu linear in t); outside t[0]..t[n-1] the end
+ *   segments are extrapolated with TH_WARN_RANGE, and a value that would
+ *   not be positive there gives TH_ERR_STATE.
+ * The specific enthalpy of a user fluid is the exact integral of its
+ * piecewise-linear cp (zero at t[0]). */
+typedef struct th_fluid {
+    int kind;   /* th_fluid_kind                                          */
+    int gas;    /* user fluids: 1 = a gas (Gnielinski temperature-ratio
+                   correction), 0 = a liquid (Prandtl-ratio correction);
+                   water and air set it themselves                        */
+    int n;      /* number of table points, 1..TH_FLUID_TABLE_MAX          */
+    double t[TH_FLUID_TABLE_MAX];   /* temperature           [K]          */
+    double rho[TH_FLUID_TABLE_MAX]; /* density               [kg/m3]      */
+    double cp[TH_FLUID_TABLE_MAX];  /* heat capacity         [J/(kg K)]   */
+    double mu[TH_FLUID_TABLE_MAX];  /* dynamic viscosity     [Pa s]       */
+    double k[TH_FLUID_TABLE_MAX];   /* thermal conductivity  [W/(m K)]    */
+} th_fluid;
+
+/* Cross-section and length. Which fields apply depends on shape:
+ *   TH_DUCT_CIRCLE           d = inside diameter
+ *   TH_DUCT_RECTANGLE        a, b = the two inside sides; all four walls
+ *                            heated
+ *   TH_DUCT_PARALLEL_PLATES  a = spacing, b = plate width (b >> a);
+ *                            D_h = 2 a, both plates heated (perimeter 2 b)
+ *   TH_DUCT_ANNULUS          d = inside diameter of the outer tube,
+ *                            d_inner = outside diameter of the inner tube;
+ *                            inner wall heated, outer insulated
+ * Derived (reported in th_tube_result): hydraulic diameter D_h = 4 A /
+ * P_wetted, flow area A, heated perimeter P. */
+typedef struct th_tube_geometry {
+    int shape;         /* th_duct_shape, default TH_DUCT_CIRCLE            */
+    double d;          /* [m] see above                                    */
+    double d_inner;    /* [m] annulus only                                 */
+    double a;          /* [m] rectangle side, or plate spacing             */
+    double b;          /* [m] rectangle side, or plate width               */
+    double length;     /* heated length L [m] > 0                          */
+    double roughness;  /* absolute roughness eps [m] >= 0, default 0       */
+} th_tube_geometry;
+
+/* Wall conditions. */
+typedef enum th_tube_wall_kind {
+    TH_TUBE_WALL_UNSET = -1,  /* th_tube_case_init's value                */
+    TH_TUBE_WALL_TEMPERATURE = 0, /* inner surface held at t_wall         */
+    TH_TUBE_WALL_FLUX = 1,    /* uniform flux q_flux over the heated
+                                 perimeter, positive into the fluid       */
+    TH_TUBE_WALL_OUTSIDE = 2  /* an outside fluid at t_outside, through
+                                 inside fouling, the wall, outside fouling
+                                 and an outside coefficient               */
+} th_tube_wall_kind;
+
+typedef struct th_tube_wall {
+    int kind;          /* th_tube_wall_kind                               */
+    double t_wall;     /* TEMPERATURE: [K]                                */
+    double q_flux;     /* FLUX: [W/m2], on the heated inner surface       */
+    double t_outside;  /* OUTSIDE: outside fluid temperature [K]          */
+    double h_outside;  /* OUTSIDE: outside coefficient [W/(m2 K)] > 0 on
+                          the outer surface; INFINITY (default) holds the
+                          outer surface at t_outside                      */
+    double k_wall;     /* OUTSIDE: wall conductivity [W/(m K)] > 0 (needed
+                          when thickness > 0)                             */
+    double thickness;  /* OUTSIDE: wall thickness [m] >= 0, default 0.
+                          Circle: cylindrical wall from d to d + 2 t;
+                          ducts: a thin plane wall of the heated area     */
+    double rf_inside;  /* OUTSIDE: fouling [m2 K/W] >= 0 on the inner
+                          surface, default 0                              */
+    double rf_outside; /* OUTSIDE: fouling [m2 K/W] >= 0 on the outer
+                          surface, default 0                              */
+} th_tube_wall;
+
+/* Automatic choice for the int options below that allow it. */
+#define TH_TUBE_AUTO (-1)
+/* Largest number of marching segments. */
+#define TH_TUBE_SEGMENTS_MAX 100000
+
+typedef struct th_tube_options {
+    int method;          /* th_nusselt_method, default TH_NU_AUTO          */
+    int friction;        /* th_friction_method, default TH_F_AUTO (laminar
+                            ducts always use their own f Re)               */
+    int entry;           /* th_entry_kind for laminar entry, default
+                            TH_ENTRY_COMBINED (uniform inlet velocity)      */
+    int correction;      /* th_property_correction, or TH_TUBE_AUTO
+                            (default): liquids TH_CORR_LIQUID, gases
+                            TH_CORR_GAS                                    */
+    int nu_wall;         /* th_wall_condition for the Nusselt number, or
+                            TH_TUBE_AUTO (default): H for a flux, T
+                            otherwise                                      */
+    int length_factor;   /* Gnielinski 1 + (D/L)^(2/3) factor, default 1   */
+    int segments;        /* 0 (default): one-shot; 1..TH_TUBE_SEGMENTS_MAX:
+                            marching                                       */
+    double tolerance;    /* on temperatures [K], 1e-12..1, default 1e-9    */
+    int max_iterations;  /* per root search, 5..1000, default 100         */
+} th_tube_options;
+
+/* A complete case. Initialise with th_tube_case_init(), then set the
+ * fluid, t_in, p_in, mdot, the geometry and the wall; every physical
+ * value is 0 (invalid) until given. */
+typedef struct th_tube_case {
+    th_fluid fluid;
+    double t_in;        /* inlet bulk temperature [K] > 0                 */
+    double p_in;        /* inlet pressure, absolute [Pa] > 0 (properties
+                           of water and air; the pressure-drop warning)    */
+    double mdot;        /* mass flow [kg/s] > 0                           */
+    th_tube_geometry geometry;
+    th_tube_wall wall;
+    th_tube_options options;
+} th_tube_case;
+
+/* Defaults as stated above: fluid and wall kinds unset, every physical
+ * value 0, geometry circular, options as documented. */
+TH_API int th_tube_case_init(th_tube_case *c);
+/* Convenience: *f becomes a user fluid with constant properties
+ * rho [kg/m3], cp [J/(kg K)], mu [Pa s], k [W/(m K)] (all > 0); gas as in
+ * th_fluid. */
+TH_API int th_fluid_constant(th_fluid *f, double rho, double cp, double mu,
+                             double k, int gas);
+/* Properties of any th_fluid at t [K] and p [Pa] (p is ignored by user
+ * fluids but must be > 0): the same values the tube solver uses.
+ * out->range_note names an extrapolation. */
+TH_API int th_fluid_props_at(const th_fluid *f, double t, double p,
+                             th_fluid_props *out);
+
+/* Most notes a result carries. */
+#define TH_TUBE_NOTES_MAX 6
+
+typedef struct th_tube_result {
+    /* main answers */
+    double t_out;        /* outlet bulk temperature [K]                   */
+    double q;            /* heat rate into the fluid [W], negative when
+                            cooled; = mdot (h(t_out) - h(t_in))           */
+    double h_mean;       /* mean inside coefficient over 0..L [W/(m2 K)]  */
+    double nu_mean;      /* h_mean D_h / k at t_bulk_mean                 */
+    double ua;           /* overall conductance [W/K] (inside only for a
+                            wall temperature; through every resistance for
+                            an outside fluid; h_mean P L for a flux)      */
+    double ntu;          /* ua / (mdot cp_mean)                           */
+    double t_wall_in;    /* inner-surface temperature at the inlet [K]     */
+    double t_wall_out;   /* ... at the outlet [K]. One-shot: with h_mean;
+                            marching: with the local coefficient          */
+    double dp;           /* pressure drop p_in - p_out [Pa]: friction plus
+                            the momentum change G^2 (1/rho_out - 1/rho_in) */
+    double dp_friction;  /* its friction part [Pa]                        */
+    /* groups and state at the mean bulk temperature */
+    double t_bulk_mean;  /* (t_in + t_out)/2 [K]                          */
+    double re;           /* Reynolds number on D_h                        */
+    double pr;           /* Prandtl number                                */
+    int regime;          /* th_regime                                     */
+    double f;            /* Darcy friction factor (fully developed; for a
+                            laminar circular tube the apparent value over L
+                            when the entry solution is available)         */
+    double velocity;     /* mean velocity at t_bulk_mean [m/s]             */
+    double cp_mean;      /* (h(t_out) - h(t_in)) / (t_out - t_in) [J/(kg K)]*/
+    double mu_ratio;     /* mu_bulk / mu_wall used                         */
+    double l_over_d;     /* L / D_h                                        */
+    int hydro_developed;   /* 1 if the velocity is developed at the outlet */
+    int thermal_developed; /* 1 if the temperature profile is developed at
+                              the outlet (th_entry_state, TH_ENTRY_AUTO)   */
+    double x_fd_thermal_over_d; /* thermal entry length / D_h             */
+    /* geometry */
+    double d_h;          /* hydraulic diameter [m]                         */
+    double area;         /* flow area [m2]                                 */
+    double perimeter;    /* heated perimeter [m]                           */
+    /* method */
+    int method;          /* th_nusselt_method used (marching: at the last
+                            segment)                                       */
+    const char *method_name; /* static display name                       */
+    const char *reason;  /* static: why (TH_NU_AUTO) or "chosen by caller" */
+    /* iteration */
+    int iterations;      /* evaluations of the outer root search (summed
+                            over the segments when marching)               */
+    double residual;     /* final |G(t_out) - t_out| [K] (largest segment) */
+    int segments;        /* 0 one-shot, else the number marched            */
+    /* warnings */
+    int note_count;      /* number of notes, 0..TH_TUBE_NOTES_MAX          */
+    const char *notes[TH_TUBE_NOTES_MAX]; /* static texts, distinct; unused
+                            entries are ""                                  */
+} th_tube_result;
+
+/* Solve the tube (one-shot or marching by c->options.segments). */
+TH_API int th_tube_solve(const th_tube_case *c, th_tube_result *out);
+
+/* Marching profile with n_points - 1 equal segments (2 <= n_points <=
+ * TH_TUBE_SEGMENTS_MAX + 1; options.segments is ignored). Each array has
+ * n_points entries at x_i = i L/(n_points - 1), any may be NULL:
+ *   x       position from the inlet [m]
+ *   t_bulk  bulk temperature [K]
+ *   t_wall  inner-surface temperature [K]
+ *   h       local coefficient [W/(m2 K)], d(x h_mean)/dx; at x = 0, where
+ *           a developing flow's local value is unbounded, the mean over the
+ *           first segment.
+ * summary (may be NULL) gets the marched th_tube_result. Arrays are
+ * written only on success. */
+TH_API int th_tube_profile(const th_tube_case *c, int n_points, double *x,
+                           double *t_bulk, double *t_wall, double *h,
+                           th_tube_result *summary);
+
+/* Inverse design. Each solves th_tube_solve (same options) inside a
+ * bracketed root search: the bracket starts at the case's own value
+ * (length or mdot, which must be > 0 as a first guess) and is widened by
+ * a factor 4 per step within the limits stated below; then toms748
+ * narrows it to 1e-12 relative. result (may be NULL) gets the solved case
+ * at the answer.
+ *
+ * Length [m] for an outlet bulk temperature t_target [K]. Searched within
+ * 1e-3 <= L/D_h <= 1e8. TH_ERR_UNREACHABLE when t_target is not strictly
+ * between t_in and the wall / outside temperature (or, for a flux, on the
+ * side the flux drives), or no length in range reaches it. */
+TH_API int th_tube_length_for_outlet(const th_tube_case *c, double t_target,
+                                     double *length, th_tube_result *result);
+/* Mass flow [kg/s] for an outlet bulk temperature t_target [K]. Searched
+ * within 1e-6 <= Re <= 1e8 (Re at the inlet temperature). The outlet
+ * temperature falls with the flow except in transitional flow, where two
+ * flows can give the same outlet: the root in the first bracket found is
+ * returned (check result->regime). TH_ERR_UNREACHABLE as above. */
+TH_API int th_tube_flow_for_outlet(const th_tube_case *c, double t_target,
+                                   double *mdot, th_tube_result *result);
+/* Mass flow [kg/s] for a duty q_target [W] (positive heats the fluid).
+ * Same search range. TH_ERR_UNREACHABLE when the sign is wrong for the
+ * wall condition, when a uniform flux fixes the duty at another value,
+ * when q_target reaches the limit of an outside fluid (every resistance
+ * but the inside one, with an infinite inside coefficient), or when even
+ * Re = 1e8 does not transfer it. */
+TH_API int th_tube_flow_for_duty(const th_tube_case *c, double q_target,
+                                 double *mdot, th_tube_result *result);
+
+/* A report checkable cell by cell: labelled rows of (label, value, unit).
+ * Text rows (regime, entry state, method, reason, status, notes) have
+ * is_text = 1 and their value in text; number rows have text "". */
+typedef struct th_tube_report_row {
+    const char *label; /* static, e.g. "Reynolds number Re"               */
+    double value;      /* number rows                                      */
+    const char *unit;  /* static, e.g. "W/(m2 K)", "-" dimensionless      */
+    int is_text;       /* 1: the value is text                            */
+    const char *text;  /* static text, "" for number rows                  */
+} th_tube_report_row;
+
+/* Rows of the report: the fixed rows plus one per note. */
+#define TH_TUBE_REPORT_ROWS (32 + TH_TUBE_NOTES_MAX)
+
+/* Fill rows[0..*n_rows-1] from a solved case: status is the status
+ * th_tube_solve returned for it (shown in a row). rows must hold
+ * TH_TUBE_REPORT_ROWS entries. */
+TH_API int th_tube_report(const th_tube_result *r, int status,
+                          th_tube_report_row rows[TH_TUBE_REPORT_ROWS],
+                          int *n_rows);
+
+/* Single values of a result, by id: */
+typedef enum th_tube_output {
+    TH_TUBE_OUT_T_OUT = 0,      /* outlet temperature [K]                 */
+    TH_TUBE_OUT_Q = 1,          /* heat rate [W]                          */
+    TH_TUBE_OUT_H = 2,          /* mean coefficient [W/(m2 K)]            */
+    TH_TUBE_OUT_NU = 3,         /* mean Nusselt number                    */
+    TH_TUBE_OUT_RE = 4,         /* Reynolds number                        */
+    TH_TUBE_OUT_PR = 5,         /* Prandtl number                         */
+    TH_TUBE_OUT_REGIME = 6,     /* th_regime                              */
+    TH_TUBE_OUT_F = 7,          /* Darcy friction factor                  */
+    TH_TUBE_OUT_DP = 8,         /* pressure drop [Pa]                     */
+    TH_TUBE_OUT_UA = 9,         /* UA [W/K]                               */
+    TH_TUBE_OUT_NTU = 10,       /* NTU                                    */
+    TH_TUBE_OUT_T_WALL_IN = 11, /* wall temperature at the inlet [K]      */
+    TH_TUBE_OUT_T_WALL_OUT = 12,/* wall temperature at the outlet [K]     */
+    TH_TUBE_OUT_METHOD = 13,    /* th_nusselt_method used                 */
+    TH_TUBE_OUT_ITERATIONS = 14,/* iteration count                        */
+    TH_TUBE_OUT_COUNT = 15
+} th_tube_output;
+TH_API int th_tube_result_value(const th_tube_result *r, int which,
+                                double *value);
 
 #ifdef __cplusplus
 } /* extern "C" */

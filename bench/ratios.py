@@ -1,0 +1,39 @@
+#!/usr/bin/python3
+"""Pair benchmark results and print API / baseline ratios.
+
+Benchmarks are named run_x/<pair>/<variant>; within a pair the variant
+starting with "inline" is the baseline measured in the same run. Reads
+Google Benchmark JSON (--benchmark_out=... --benchmark_out_format=json,
+ideally with --benchmark_repetitions and medians) and prints a Markdown
+table of calls per second and ratios (CPU time, median where present).
+
+Usage: /usr/bin/python3 bench/ratios.py results.json
+"""
+import collections
+import json
+import sys
+
+
+def main(path):
+    data = json.load(open(path))
+    rows = collections.OrderedDict()
+    for b in data["benchmarks"]:
+        if b.get("run_type") == "aggregate" and b.get("aggregate_name") != "median":
+            continue
+        name = b.get("run_name", b["name"])
+        parts = name.split("/")
+        if len(parts) < 3:
+            continue
+        pair, variant = parts[1], "/".join(parts[2:])
+        rows.setdefault(pair, {})[variant] = b["cpu_time"]
+    print("| function | variant | ns per call (CPU) | calls per second | ratio to baseline |")
+    print("|---|---|---|---|---|")
+    for pair, vs in rows.items():
+        base = next((t for v, t in vs.items() if v.startswith("inline")), None)
+        for v, t in vs.items():
+            ratio = "%.2f" % (t / base) if base else "-"
+            print("| %s | %s | %.1f | %.3g | %s |" % (pair, v, t, 1e9 / t, ratio))
+
+
+if __name__ == "__main__":
+    main(sys.argv[1])
