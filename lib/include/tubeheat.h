@@ -73,7 +73,8 @@ typedef enum th_status {
     TH_WARN_RANGE = 1,
     /* Bad input: NULL output pointer, NaN/infinite argument, zero or
      * negative where physically meaningless, inconsistent arguments
-     * (e.g. inner diameter >= outer diameter), unknown option flag. */
+     * (e.g. inner diameter >= outer diameter), unknown option flag, or
+     * finite arguments so extreme that the result would overflow. */
     TH_ERR_INPUT = 10,
     /* Unknown method identifier or method name. */
     TH_ERR_METHOD = 11,
@@ -333,7 +334,8 @@ typedef struct th_conditions {
     double mu_ratio;      /* mu_bulk / mu_wall, > 0, default 1             */
     double rel_roughness; /* eps/D >= 0, default 0 (smooth)                */
     int correction;       /* th_property_correction, default TH_CORR_NONE  */
-    double pr_wall;       /* Pr at the wall (TH_CORR_LIQUID), default = pr */
+    double pr_wall;       /* Pr at the wall temperature, > 0; required with
+                             TH_CORR_LIQUID (init leaves 0 = not given)    */
     double t_ratio;       /* T_bulk/T_wall in kelvin (TH_CORR_GAS), def. 1 */
     int length_factor;    /* 1: Gnielinski mean over L multiplies by
                              1 + (D/L)^(2/3) when L is finite (default 1)  */

@@ -140,7 +140,9 @@ int th_friction_factor(int method, double re, double rel_roughness, double *f) {
         need_nonnegative(rel_roughness);
         need(rel_roughness < 1.0);
         th::range_check rc;
-        *f = checked(th::friction(method, re, rel_roughness, rc));
+        const double ff = checked(th::friction(method, re, rel_roughness, rc));
+        need(ff > 0.0);  // 1/t^2 underflows to 0 when 6.9/Re overflows (subnormal Re)
+        *f = ff;
         return rc.status();
     });
 }
@@ -178,6 +180,7 @@ int th_pressure_drop_mass_flow(int method, double mdot, double d, double length,
         const double re = rho * u * d / mu;
         th::range_check rc;
         const double ff = checked(th::friction(method, re, rel_roughness, rc));
+        need(ff > 0.0);  // see th_friction_factor
         const double p = checked(ff * (length / d) * rho * u * u / 2.0);
         if (f) *f = ff;
         *dp = p;

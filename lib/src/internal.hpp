@@ -62,10 +62,11 @@ inline void need_finite(double x) { need(finite(x)); }
 inline void need_positive_or_inf(double x) { need(!std::isnan(x) && x > 0.0); }
 inline void need_temperature(double t) { need(finite(t) && t > 0.0); }
 
-// A result about to be written with a success code must be finite; if the
-// arithmetic produced NaN/inf, report it instead of writing it.
+// A result about to be written with a success code must be finite. Inputs
+// that are each finite can still be so extreme that the result overflows
+// (1e308 * 1e308): that is bad input, reported as such, never written.
 inline double checked(double x) {
-    if (!std::isfinite(x)) fail(TH_ERR_INTERNAL);
+    if (!std::isfinite(x)) fail(TH_ERR_INPUT);
     return x;
 }
 

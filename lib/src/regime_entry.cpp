@@ -160,7 +160,7 @@ int th_entry_state(int method, double re, double pr, double x_over_d, int wall,
         r.thermal_developed = x_over_d >= lt ? 1 : 0;
         // x* is infinite for an infinite x/D; report the largest finite
         // double there rather than infinity (the contract forbids inf).
-        r.x_star = std::isinf(x_over_d) ? 1.7976931348623157e308 : x_over_d / (re * pr);
+        r.x_star = std::isinf(x_over_d) ? 1.7976931348623157e308 : checked(x_over_d / (re * pr));
         *info = r;
         return rc.status();
     });

@@ -19,8 +19,9 @@ const char *th_status_message(int status) {
                "(the value is an extrapolation)";
     case TH_ERR_INPUT:
         return "bad input: an argument is missing, not a finite number, "
-               "zero or negative where that has no physical meaning, or "
-               "inconsistent with another argument";
+               "zero or negative where that has no physical meaning, "
+               "inconsistent with another argument, or so extreme that the "
+               "result is not representable";
     case TH_ERR_METHOD:
         return "unknown method";
     case TH_ERR_NO_CONVERGENCE:

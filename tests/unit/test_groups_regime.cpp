@@ -90,8 +90,8 @@ TEST_CASE("groups: bad input for every function", "[groups][input]") {
     CHECK(th_h_from_nusselt(0.0, 0.6, 0.01, &v) == TH_ERR_INPUT);
     CHECK(th_nusselt_from_h(100.0, 0.01, inf, &v) == TH_ERR_INPUT);
     CHECK(v == -5.0);
-    // Overflow of a product is reported, never written as infinity.
-    CHECK(th_reynolds(1e300, 1e300, 1.0, 1e-3, &v) == TH_ERR_INTERNAL);
+    // Overflow of a product is bad input, never written as infinity.
+    CHECK(th_reynolds(1e300, 1e300, 1.0, 1e-3, &v) == TH_ERR_INPUT);
     CHECK(v == -5.0);
 }
 
