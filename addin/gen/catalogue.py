@@ -80,6 +80,7 @@ class Arg:
     default: object = None      # None = no value (field keeps init value)
     default_doc: str | None = None
     field: str | None = None
+    column: bool = False        # takes a range, one value per row (rows_of)
 
     @property
     def kind(self) -> str:
@@ -109,6 +110,7 @@ class Function:
     example: str | None = None
     notes: str | None = None
     args: list = field(default_factory=list)
+    rows_of: str | None = None  # id of the function applied row by row
 
     @property
     def required_count(self) -> int:
@@ -208,7 +210,8 @@ def load(directory: pathlib.Path) -> Catalogue:
         where = f"{path.name}: function '{f.get('name', '?')}'"
         known = {"name", "id", "summary", "returns", "category", "c", "adapter",
                  "locals", "result", "result_type", "method_used", "reason",
-                 "range_note", "example", "notes", "arg", "args_from", "args_drop"}
+                 "range_note", "example", "notes", "arg", "args_from", "args_drop",
+                 "rows_of", "columns"}
         extra = set(f) - known
         if extra:
             _err(where, f"unknown keys {sorted(extra)}")
@@ -242,6 +245,8 @@ def load(directory: pathlib.Path) -> Catalogue:
     names_seen = set()
     for fid, (topic, path, f) in by_id.items():
         where = f"{path.name}: function '{f['name']}'"
+        if "rows_of" in f:
+            _table_function(f, where, by_id, resolve_args)
         fn = Function(name=f["name"], id=f["id"], summary=f["summary"],
                       returns=f["returns"], topic=topic.topic,
                       category=f.get("category", "Add-In"), c=f.get("c"),
@@ -251,7 +256,8 @@ def load(directory: pathlib.Path) -> Catalogue:
                       result_type=f.get("result_type", "number"),
                       method_used=f.get("method_used"), reason=f.get("reason"),
                       range_note=f.get("range_note"), example=f.get("example"),
-                      notes=f.get("notes"), args=resolve_args(fid, ()))
+                      notes=f.get("notes"), rows_of=f.get("rows_of"),
+                      args=f["_args"] if "rows_of" in f else resolve_args(fid, ()))
         _validate_function(fn, where, choices, methods)
         up = fn.name.upper()
         if up in names_seen:
@@ -260,6 +266,45 @@ def load(directory: pathlib.Path) -> Catalogue:
         topic.functions.append(fn)
     topics.sort(key=lambda t: (t.order, t.topic))
     return Catalogue(topics, choices, methods)
+
+
+def _table_function(f: dict, where: str, by_id: dict, resolve_args) -> None:
+    """A `rows_of` entry: the named function applied row by row to columns.
+
+    Its arguments are those of the row function; the ones listed in
+    `columns` (required numbers) take a range each, one value per row (a
+    single value is used for every row). The result is an array of the
+    common shape; a row whose input the row function rejects shows, in its
+    own cell, the error that function would show. Only the generated code is
+    involved: no adapter, no C expression of its own."""
+    src = f["rows_of"]
+    if src not in by_id:
+        _err(where, f"rows_of '{src}' is not a function id")
+    _, _, row = by_id[src]
+    if "rows_of" in row:
+        _err(where, "rows_of must name a function that is not itself a table")
+    if row.get("result_type", "number") != "number":
+        _err(where, "rows_of needs a function with a number result")
+    for k in ("c", "adapter", "locals", "result", "arg", "args_from", "args_drop",
+              "method_used", "reason", "range_note"):
+        if k in f:
+            _err(where, f"'{k}' is not allowed with rows_of (the row function has it)")
+    if f.get("result_type", "array") != "array":
+        _err(where, "rows_of functions return an array (result_type \"array\")")
+    f["result_type"] = "array"
+    columns = f.get("columns")
+    if not isinstance(columns, list) or not columns:
+        _err(where, "rows_of needs 'columns', the argument names taking a column")
+    args = [copy.deepcopy(a) for a in resolve_args(src, ())]
+    by_name = {a.name: a for a in args}
+    for name in columns:
+        a = by_name.get(name)
+        if a is None:
+            _err(where, f"columns names '{name}', not an argument of '{src}'")
+        if a.kind != "number" or a.optional:
+            _err(where, f"column '{name}' must be a required number argument")
+        a.column = True
+    f["_args"] = args
 
 
 def _validate_function(fn: Function, where: str, choices: dict, methods: dict):
@@ -271,14 +316,14 @@ def _validate_function(fn: Function, where: str, choices: dict, methods: dict):
         _err(where, "id must be lowerCamelCase ([a-z][a-zA-Z0-9]*)")
     if fn.category not in CATEGORIES:
         _err(where, f"category must be one of {CATEGORIES}")
-    if (fn.c is None) == (fn.adapter is None):
+    if fn.rows_of is None and (fn.c is None) == (fn.adapter is None):
         _err(where, "give exactly one of 'c' and 'adapter'")
     if fn.adapter is not None and not C_IDENT.match(fn.adapter):
         _err(where, "adapter must be an identifier")
     if fn.result_type not in RESULT_TYPES:
         _err(where, f"result_type must be one of {RESULT_TYPES}")
-    if fn.result_type == "array" and fn.adapter is None:
-        _err(where, "array results need an adapter")
+    if fn.result_type == "array" and fn.adapter is None and fn.rows_of is None:
+        _err(where, "array results need an adapter (or rows_of)")
     for loc in fn.locals:
         if not C_IDENT.match(str(loc.get("var", ""))) or loc["var"] in RESERVED - IDL_ONLY:
             _err(where, f"bad local variable {loc}")
@@ -360,6 +405,9 @@ def choice_value(ch: Choice, text: str):
 def arg_doc(a: Arg, catalogue: Catalogue) -> str:
     """Full help of one argument: the sentence, accepted texts, unit, default."""
     parts = [a.help.strip()]
+    if a.column:
+        parts.append("A column (range) with one value per row; a single value "
+                     "is used for every row.")
     if a.kind == "choice":
         ch = catalogue.choices[a.ref]
         parts.append("One of: " + "; ".join(

@@ -14,7 +14,13 @@ def cstr(s: str) -> str:
     return json.dumps(s)  # ASCII text: a JSON string is a valid C literal
 
 
+ANY_ROWS = ("::com::sun::star::uno::Sequence< ::com::sun::star::uno::Sequence< "
+            "::com::sun::star::uno::Any > >")
+
+
 def cpp_param(a: cat.Arg) -> str:
+    if a.column:
+        return f"const {ANY_ROWS} &{a.name}"
     if a.optional:
         return f"const ::com::sun::star::uno::Any &{a.name}"
     if a.kind == "number":
@@ -144,7 +150,11 @@ def emit_dispatch_cpp(c: cat.Catalogue) -> str:
          '#include "runtime.hpp"',
          "",
          "#include <cmath>",
+         "#include <cstdint>",
+         "#include <cstring>",
          "#include <limits>",
+         "#include <string>",
+         "#include <vector>",
          "",
          "namespace th_addin {",
          "",
@@ -176,8 +186,12 @@ def emit_dispatch_cpp(c: cat.Catalogue) -> str:
         L.append("")
     L.append("// ---- one evaluator per function ------------------------------------")
     for fn in c.functions:
+        if fn.rows_of:
+            continue  # evaluated row by row with its row function's evaluator
         L += _eval_function(fn, c)
         L.append("")
+    if any(fn.rows_of for fn in c.functions):
+        L += TABLE_HELPERS.splitlines()
     L.append("// ---- registry ------------------------------------------------------")
     rt = {"number": "ResultType::number", "text": "ResultType::text", "array": "ResultType::array"}
     for fn in c.functions:
@@ -190,9 +204,12 @@ def emit_dispatch_cpp(c: cat.Catalogue) -> str:
             args_ref = f"k_args_{fn.id}"
         else:
             args_ref = "nullptr"
+        # A table function is registered with its row function's evaluator:
+        # TH.WHY / TH.STATUS of it explain one row (given that row's cells).
+        ev, res_type = (fn.rows_of, "number") if fn.rows_of else (fn.id, fn.result_type)
         L.append(f"static const FunctionInfo fn_{fn.id} = {{{cstr(fn.name)}, {cstr(fn.id)}, "
-                 f"eval_{fn.id}, {args_ref}, {len(fn.args)}, {fn.required_count}, "
-                 f"{rt[fn.result_type]}}};")
+                 f"eval_{ev}, {args_ref}, {len(fn.args)}, {fn.required_count}, "
+                 f"{rt[res_type]}}};")
     L.append("")
     L.append("static const FunctionInfo *const k_all_functions[] = {")
     for fn in c.functions:
@@ -212,6 +229,18 @@ def emit_dispatch_cpp(c: cat.Catalogue) -> str:
     finish = {"number": "finish_number", "text": "finish_text", "array": "finish_array"}
     for fn in c.functions:
         L.append(signature(fn, True) + " {")
+        if fn.rows_of:
+            vals = ", ".join("::com::sun::star::uno::Any()" if a.column
+                             else f"::com::sun::star::uno::Any({a.name})" for a in fn.args)
+            cols = ", ".join(f"{{{i}, &{a.name}}}" for i, a in enumerate(fn.args) if a.column)
+            L.append("    // Column slots stay empty here; table_rows fills them row by row.")
+            L.append(f"    const ::com::sun::star::uno::Any v[] = {{{vals}}};")
+            L.append(f"    const ColumnArg cols[] = {{{cols}}};")
+            L.append(f"    return table_rows(fn_{fn.id}, v, {len(fn.args)}, cols, "
+                     f"{sum(1 for a in fn.args if a.column)});")
+            L.append("}")
+            L.append("")
+            continue
         if fn.args:
             vals = ", ".join(f"::com::sun::star::uno::Any({a.name})" for a in fn.args)
             L.append(f"    const ::com::sun::star::uno::Any v[] = {{{vals}}};")
@@ -223,3 +252,101 @@ def emit_dispatch_cpp(c: cat.Catalogue) -> str:
     L.append("}  // namespace th_addin")
     L.append("")
     return "\n".join(L)
+
+
+# Emitted once when the catalogue has a `rows_of` (table) function.
+TABLE_HELPERS = r"""// ---- table functions (rows_of): one call for a whole column ------------
+// A spreadsheet calls an add-in function through UNO reflection, which costs
+// microseconds per cell; a table function pays it once for a whole column and
+// runs the row function's own evaluator (same checks, same library call) on
+// every row.
+using AnyRows = ::com::sun::star::uno::Sequence< ::com::sun::star::uno::Sequence< ::com::sun::star::uno::Any > >;
+struct ColumnArg {
+    int index;            // position in the argument list
+    const AnyRows *cells;
+};
+
+// Calc keeps an error inside a number array as a NaN whose low 32 bits hold
+// the error code (LibreOffice formula/errorcodes.hxx, GetDoubleErrorValue),
+// so a rejected row shows in its own cell the error the row function shows,
+// and the other rows keep their values.
+static double error_in_array(const Outcome &o) {
+    std::uint32_t code = 519;  // #VALUE!: wrong type, internal error
+    if (!o.wrong_type) {
+        switch (o.status) {
+        case TH_ERR_INPUT:
+        case TH_ERR_METHOD: code = 502; break;           // Err:502
+        case TH_ERR_NO_CONVERGENCE: code = 523; break;   // Err:523
+        case TH_ERR_UNREACHABLE:
+        case TH_ERR_STATE: code = 503; break;            // #NUM!
+        default: break;
+        }
+    }
+    const std::uint64_t bits = UINT64_C(0x7FF8000000000000) | code;
+    double d = 0.0;
+    std::memcpy(&d, &bits, sizeof d);
+    return d;
+}
+
+// An empty cell counts as 0, as it does for the row function, so that a
+// "> 0" check rejects it rather than it meaning "not given". Calc hands the
+// empty cells of a range to an add-in as empty text (and so, alike, a
+// formula cell showing "").
+static bool is_empty_cell(const ::com::sun::star::uno::Any &cell) {
+    if (!cell.hasValue()) return true;
+    if (cell.getValueTypeClass() != ::com::sun::star::uno::TypeClass_STRING) return false;
+    return static_cast<const ::rtl::OUString *>(cell.getValue())->isEmpty();
+}
+
+static ::com::sun::star::uno::Any table_error(const FunctionInfo &fn, int index, const std::string &why) {
+    Outcome o;
+    o.status = TH_ERR_INPUT;
+    o.detail = std::string(fn.display) + ": argument " + std::to_string(index + 1) + " (" +
+               fn.args[index].label + ") " + why;
+    return finish_array(o);  // throws: the whole array shows Err:502
+}
+
+static ::com::sun::star::uno::Any table_rows(const FunctionInfo &fn, const ::com::sun::star::uno::Any *given,
+                                             int count, const ColumnArg *cols, int ncols) {
+    // Every column is rows x width, or a single value used for every row.
+    sal_Int32 rows = 1, width = 1;
+    for (int k = 0; k < ncols; ++k) {
+        const AnyRows &m = *cols[k].cells;
+        const sal_Int32 r = m.getLength();
+        const sal_Int32 w = r > 0 ? m[0].getLength() : 0;
+        for (sal_Int32 i = 1; i < r; ++i)
+            if (m[i].getLength() != w)
+                return table_error(fn, cols[k].index, "is not a rectangular range");
+        if (r == 0 || w == 0) return table_error(fn, cols[k].index, "is an empty range");
+        if (r == 1 && w == 1) continue;
+        if (rows == 1 && width == 1) {
+            rows = r;
+            width = w;
+        } else if (r != rows || w != width) {
+            return table_error(fn, cols[k].index,
+                               "has " + std::to_string(r) + " x " + std::to_string(w) +
+                                   " cells; the other columns have " + std::to_string(rows) +
+                                   " x " + std::to_string(width));
+        }
+    }
+    std::vector< ::com::sun::star::uno::Any > v(given, given + count);
+    ::com::sun::star::uno::Sequence< ::com::sun::star::uno::Sequence<double> > out(rows);
+    auto *lines = out.getArray();
+    for (sal_Int32 i = 0; i < rows; ++i) {
+        ::com::sun::star::uno::Sequence<double> line(width);
+        double *p = line.getArray();
+        for (sal_Int32 j = 0; j < width; ++j) {
+            for (int k = 0; k < ncols; ++k) {
+                const AnyRows &m = *cols[k].cells;
+                const bool single = m.getLength() == 1 && m[0].getLength() == 1;
+                const ::com::sun::star::uno::Any &cell = single ? m[0][0] : m[i][j];
+                v[cols[k].index] = is_empty_cell(cell) ? ::com::sun::star::uno::Any(0.0) : cell;
+            }
+            const Outcome o = evaluate(fn, v.data(), count);
+            p[j] = (o.wrong_type || TH_FAILED(o.status)) ? error_in_array(o) : o.value;
+        }
+        lines[i] = line;
+    }
+    return ::com::sun::star::uno::Any(out);
+}
+"""

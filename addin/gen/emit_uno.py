@@ -38,6 +38,10 @@ COMPANIONS = [
 
 
 def idl_type(a: cat.Arg) -> str:
+    if a.column:
+        # A range with any cell content, so that text and empty cells stay
+        # distinguishable from numbers row by row.
+        return "sequence< sequence< any > >"
     if a.optional:
         return "any"
     return "double" if a.kind == "number" else "string"

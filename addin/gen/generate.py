@@ -36,10 +36,10 @@ def resolved_json(c: cat.Catalogue) -> str:
     for fn in c.functions:
         out["functions"].append({
             "name": fn.name, "id": fn.id, "topic": fn.topic, "example": fn.example,
-            "result_type": fn.result_type,
+            "result_type": fn.result_type, "rows_of": fn.rows_of,
             "args": [{"name": a.name, "type": a.type, "check": a.check,
                       "optional": a.optional, "default": a.default,
-                      "unit": a.unit} for a in fn.args]})
+                      "unit": a.unit, "column": a.column} for a in fn.args]})
     for k, ch in c.choices.items():
         out["choices"][k] = [{"text": v["text"], "aliases": v["aliases"]} for v in ch.values]
     for k, m in c.methods.items():

@@ -473,7 +473,8 @@ TH_API int th_length_for_outlet_flux(double t_in, double t_target,
  *     extrapolated (TH_WARN_RANGE): 150 K <= t < 200 K, 2000 K < t <=
  *                                3000 K, or 0.2 MPa < p <= 1 MPa (cp up
  *                                to about 10 % off at 150 K and 1 MPa);
- *     TH_ERR_STATE:              t < 150 K, t > 3000 K or p > 1 MPa.
+ *     TH_ERR_STATE:              t < 150 K, t > 3000 K, p > 1 MPa, or
+ *                                p < 1 Pa (rarefied: not a continuum).
  * ---------------------------------------------------------------------- */
 
 /* A property set at one state. */
@@ -557,19 +558,21 @@ TH_API int th_air_prandtl(double t, double p, double *pr);           /* - */
 /* THERMAL ENTRY, exact: Graetz series (T) and Siegel-Sparrow-Hallman
  * series (H) with eigenvalues computed from Kummer's function, and the
  * extended Leveque expansion below x* = 1e-6 (blended, continuous).
- * Accurate to about 1e-5 relative for every x* > 0. Cost: ~0.2-2 us for
- * x* >= 1e-5 (local), ~0.1 s once per wall condition on first use (the
- * eigenvalue table), then thread-safe and read-only. */
+ * Accurate to about 1e-5 relative for every x* > 0. Cost: local 0.02-2 us
+ * (2 us at x* = 1e-5, 0.2 us at 1e-3), mean ~30 ns; 20-35 ms once per wall
+ * condition on first use (the eigenvalue table), then read-only. */
 TH_API int th_thermal_entry_nusselt(double x_star, int wall, int averaging,
                                     double *nu);
 
-/* COMBINED ENTRY, numerical: Nu for Prandtl number pr > 0 (validated for
- * 0.5 <= pr <= 1e4; TH_WARN_RANGE outside, and for x* < 1e-7 where the
- * value is a power-law extrapolation). Accuracy about 0.1-0.3 % against
+/* COMBINED ENTRY, numerical: Nu for Prandtl number pr, computed for
+ * 1e-6 <= pr <= 1e9 (TH_ERR_INPUT outside) and validated for
+ * 0.5 <= pr <= 1e4 (TH_WARN_RANGE outside; below Pr ~ 0.1 the neglected
+ * axial conduction matters unless Pe = Re Pr >> 100), and TH_WARN_RANGE
+ * for x* < 1e-7, where the value is a power-law extrapolation. Accuracy about 0.1-0.3 % against
  * the converged solution (docs/laminar-entry.md). Cost: the first call
- * for a new (pr, wall) marches the equations (~10-30 ms); the table is then
+ * for a new (pr, wall) marches the equations (~15-25 ms); the table is then
  * kept in a mutex-protected cache of 16 (pr, wall) pairs and later calls
- * take well under a microsecond. x_star = INFINITY gives the exact fully
+ * take ~50 ns. x_star = INFINITY gives the exact fully
  * developed value. */
 TH_API int th_combined_entry_nusselt(double x_star, double pr, int wall,
                                      int averaging, double *nu);
@@ -641,8 +644,10 @@ TH_API int th_annulus_laminar(double ratio, int heated_wall, double *f_re,
  * One call takes a fluid, an inlet state, a flow, a geometry and a wall
  * condition and returns the outlet temperature, the heat rate, the mean
  * coefficient, the pressure drop and the wall temperatures, with the
- * Nusselt method used and why. Internally it uses th_nusselt(),
- * th_friction_factor() and the property functions above.
+ * Nusselt method used and why. Internally it uses th_nusselt(), the
+ * friction factors of th_friction_factor() (plus th_combined_entry_friction
+ * and th_duct_laminar for laminar flow), th_entry_state() and the property
+ * functions above.
  *
  * Two ways to solve (th_tube_options.segments):
  *   one-shot (segments = 0, default): properties at the mean bulk
@@ -654,6 +659,13 @@ TH_API int th_annulus_laminar(double ratio, int heated_wall, double *f_re,
  *   With constant properties and a uniform wall temperature or flux the two
  *   agree exactly; with an outside fluid they differ where h varies along
  *   the tube (the marched answer is then the better one).
+ *
+ * The numerical combined-entry Nusselt number (TH_NU_COMBINED_ENTRY_NUMERIC,
+ * the automatic choice for laminar flow from a uniform inlet) costs a
+ * march of its own equations at every new Prandtl number; for fluids with
+ * varying properties the solver evaluates it on a fixed grid of Prandtl
+ * numbers (ratio 1.1) and interpolates in ln Pr (cubic, continuous;
+ * within 1e-6 of the direct value).
  *
  * Iteration: t_out (and, per segment, the segment outlet) is the root of
  * G(t) - t, G being the outlet computed with properties at the mean of
@@ -776,8 +788,10 @@ typedef struct th_tube_wall {
 
 typedef struct th_tube_options {
     int method;          /* th_nusselt_method, default TH_NU_AUTO          */
-    int friction;        /* th_friction_method, default TH_F_AUTO (laminar
-                            ducts always use their own f Re)               */
+    int friction;        /* th_friction_method, default TH_F_AUTO: with it
+                            laminar flow uses the apparent friction of the
+                            developing flow (circle, TH_ENTRY_COMBINED) or
+                            the duct's own f Re (th_duct_laminar)          */
     int entry;           /* th_entry_kind for laminar entry, default
                             TH_ENTRY_COMBINED (uniform inlet velocity)      */
     int correction;      /* th_property_correction, or TH_TUBE_AUTO
@@ -810,6 +824,23 @@ typedef struct th_tube_case {
 /* Defaults as stated above: fluid and wall kinds unset, every physical
  * value 0, geometry circular, options as documented. */
 TH_API int th_tube_case_init(th_tube_case *c);
+/* Convenience for flat argument lists (spreadsheets, scripts): sets the
+ * fluid kind, the cross-section from two sizes and the wall from one
+ * value, leaving every other field of *c as it is.
+ *   fluid      th_fluid_kind; TH_FLUID_USER also sets n = 1 (constant
+ *              properties in rho[0], cp[0], mu[0], k[0]) when n is 0
+ *   shape      th_duct_shape with size1, size2 [m]:
+ *              circle: size1 = d (size2 ignored); rectangle: sides size1
+ *              and size2; parallel plates: spacing size1, width size2;
+ *              annulus: outer tube's inside diameter size1, inner tube's
+ *              outside diameter size2
+ *   wall_kind  th_tube_wall_kind with value: the wall temperature [K], the
+ *              flux [W/m2] or the outside fluid temperature [K]
+ * Values are checked when the case is solved, except that the kinds and
+ * shape must be known ones (else TH_ERR_INPUT). */
+TH_API int th_tube_case_set(th_tube_case *c, int fluid, int shape,
+                            double size1, double size2, int wall_kind,
+                            double value);
 /* Convenience: *f becomes a user fluid with constant properties
  * rho [kg/m3], cp [J/(kg K)], mu [Pa s], k [W/(m K)] (all > 0); gas as in
  * th_fluid. */
@@ -846,12 +877,13 @@ typedef struct th_tube_result {
     double re;           /* Reynolds number on D_h                        */
     double pr;           /* Prandtl number                                */
     int regime;          /* th_regime                                     */
-    double f;            /* Darcy friction factor (fully developed; for a
-                            laminar circular tube the apparent value over L
-                            when the entry solution is available)         */
+    double f;            /* mean Darcy friction factor over 0..L, as used
+                            for dp (see options.friction); marching: the
+                            length mean of the segments' values           */
     double velocity;     /* mean velocity at t_bulk_mean [m/s]             */
     double cp_mean;      /* (h(t_out) - h(t_in)) / (t_out - t_in) [J/(kg K)]*/
-    double mu_ratio;     /* mu_bulk / mu_wall used                         */
+    double mu_ratio;     /* mu_bulk / mu_wall used (marching: in the last
+                            segment)                                       */
     double l_over_d;     /* L / D_h                                        */
     int hydro_developed;   /* 1 if the velocity is developed at the outlet */
     int thermal_developed; /* 1 if the temperature profile is developed at

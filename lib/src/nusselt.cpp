@@ -1,9 +1,7 @@
 // nusselt.cpp - th_nusselt(): validation of the conditions, the dispatch to
 // the method chosen by the caller, the automatic choice, and method names.
 #include "correlations.hpp"
-#if defined(TH_HAVE_ENTRY)
 #include "entry_internal.hpp"
-#endif
 
 #include <cmath>
 #include <limits>
@@ -43,10 +41,23 @@ constexpr method_name nusselt_names[] = {
     {TH_NU_COMBINED_ENTRY_NUMERIC, "combined entry"},
 };
 
-const char *display_name(int id) {
+// Display name by method id, i.e. the first entry of each id above. Every
+// th_nusselt() call names its method in the result, so this is a table
+// indexed by id (built at compile time) rather than a search of the list.
+struct names_by_id {
+    const char *name[TH_NU_METHOD_COUNT];
+};
+constexpr names_by_id make_names_by_id() {
+    names_by_id t{};
     for (const auto &m : nusselt_names)
-        if (m.id == id) return m.name;
-    return nullptr;
+        if (m.id >= 0 && m.id < TH_NU_METHOD_COUNT && t.name[m.id] == nullptr)
+            t.name[m.id] = m.name;
+    return t;
+}
+constexpr names_by_id display_names = make_names_by_id();
+
+const char *display_name(int id) {
+    return id >= 0 && id < TH_NU_METHOD_COUNT ? display_names.name[id] : nullptr;
 }
 
 void validate(const th_conditions &c) {
@@ -85,14 +96,12 @@ bool is_laminar_method(int m) {
 
 double laminar_developed(const th_conditions &c, range_check &rc) {
     if (c.duct == TH_DUCT_CIRCLE) return nu_laminar_developed(c, rc);
-#ifdef TH_HAVE_ENTRY
     double f_re = 0.0, nu_t = 0.0, nu_h = 0.0;
     duct_laminar_developed(c.duct, c.duct_ratio, &f_re, &nu_t, &nu_h);
     rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
+    rc.require(duct_laminar_in_range(c.duct, c.duct_ratio),
+               "duct ratio beyond the source table (extrapolated)");
     return c.wall == TH_WALL_T ? nu_t : nu_h;
-#else
-    fail(TH_ERR_METHOD);
-#endif
 }
 
 double evaluate(int method, const th_conditions &c, range_check &rc, double &f) {
@@ -119,10 +128,9 @@ double evaluate(int method, const th_conditions &c, range_check &rc, double &f) 
         return nu_gnielinski_laminar(c, rc);
     case TH_NU_LIQUID_METAL:
         return nu_liquid_metal(c, rc);
-#ifdef TH_HAVE_ENTRY
     case TH_NU_GRAETZ_EXACT: {
         rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
-        rc.require(c.entry == TH_ENTRY_THERMAL,
+        rc.require(c.entry == TH_ENTRY_THERMAL || c.pr > 1e4,
                    "exact series is for thermal entry (velocity developed); combined entry requested");
         const double xs = std::isinf(c.l_over_d) ? c.l_over_d : c.l_over_d / (c.re * c.pr);
         return thermal_entry_nu(xs, c.wall, c.averaging);
@@ -132,9 +140,9 @@ double evaluate(int method, const th_conditions &c, range_check &rc, double &f) 
         rc.require(c.entry == TH_ENTRY_COMBINED,
                    "combined-entry solution requested for a thermal-entry case");
         const double xs = std::isinf(c.l_over_d) ? c.l_over_d : c.l_over_d / (c.re * c.pr);
+        rc.require(c.pr >= 0.5 && c.pr <= 1e4, "Pr outside the validated range 0.5..1e4 of the combined-entry solution");
         return combined_entry_nu(xs, c.pr, c.wall, c.averaging);
     }
-#endif
     default:
         fail(TH_ERR_METHOD);
     }
@@ -154,21 +162,18 @@ evaluation choose(const th_conditions &c) {
             e.method = TH_NU_LAMINAR_DEVELOPED;
             e.reason = "laminar, fully developed";
         } else if (c.entry == TH_ENTRY_THERMAL) {
-#ifdef TH_HAVE_ENTRY
             e.method = TH_NU_GRAETZ_EXACT;
             e.reason = "laminar thermal entry (velocity developed): exact series";
-#else
-            e.method = TH_NU_SHAH;
-            e.reason = "laminar thermal entry (velocity developed): Shah fit of the exact solution";
-#endif
         } else {
-#ifdef TH_HAVE_ENTRY
-            if (c.pr >= 0.5 && c.pr <= 1e4) {
+            if (c.pr > 1e4) {
+                // The velocity develops Pr times faster than the temperature:
+                // the thermal-entry solution is the combined one's limit.
+                e.method = TH_NU_GRAETZ_EXACT;
+                e.reason = "laminar combined entry at Pr > 1e4: thermal-entry exact series (its large-Pr limit)";
+            } else if (c.pr >= 0.5) {
                 e.method = TH_NU_COMBINED_ENTRY_NUMERIC;
                 e.reason = "laminar combined entry: numerical boundary-layer solution";
-            } else
-#endif
-            if (c.averaging == TH_MEAN) {
+            } else if (c.averaging == TH_MEAN) {
                 e.method = TH_NU_GNIELINSKI_LAMINAR;
                 e.reason = "laminar combined entry, mean: Gnielinski composite";
             } else {

@@ -27,11 +27,15 @@ constexpr double P_OK_MAX = 0.2e6;     // Pa
 constexpr double T_HARD_MIN = 150.0;   // K
 constexpr double T_HARD_MAX = 3000.0;  // K
 constexpr double P_HARD_MAX = 1.0e6;   // Pa
+// Below about 1 Pa the gas in any practical tube is rarefied (mean free
+// path of millimetres): the continuum correlations and the dilute-gas
+// transport model do not describe it, and no value is given.
+constexpr double P_HARD_MIN = 1.0;     // Pa
 
 void check_air_state(double t, double p, range_check &rc) {
     need_temperature(t);
     need_positive(p);
-    if (t < T_HARD_MIN || t > T_HARD_MAX || p > P_HARD_MAX)
+    if (t < T_HARD_MIN || t > T_HARD_MAX || p > P_HARD_MAX || p < P_HARD_MIN)
         fail(TH_ERR_STATE);
     rc.require(t >= T_OK_MIN,
                "air: t < 200 K, below the range where the ideal, dilute gas "

@@ -1,0 +1,33 @@
+#!/usr/bin/python3
+"""Instructions per call of the C API against the inline formula, from a
+callgrind profile of bench/calc/instr_count.c (see bench/calc/run.sh).
+
+    instr_table.py callgrind.out [calls per run, default 100000]
+
+Prints a Markdown table: inclusive instructions of run_<pair>_inline and
+run_<pair>_api divided by the number of calls, and their ratio.
+"""
+import re
+import subprocess
+import sys
+
+
+def main(path: str, calls: int) -> None:
+    text = subprocess.run(["callgrind_annotate", "--inclusive=yes", "--threshold=100", path],
+                          capture_output=True, text=True, check=True).stdout
+    cost = {}
+    for m in re.finditer(r"^\s*([\d,]+) .*?:run_(\w+)_(inline|api) ", text, re.M):
+        cost[(m.group(2), m.group(3))] = int(m.group(1).replace(",", "")) / calls
+    print("## Library (callgrind, instructions per call, deterministic)")
+    print()
+    print("| function | inline formula | C API | ratio |")
+    print("|---|---|---|---|")
+    for pair in dict.fromkeys(p for p, _ in cost):
+        a, b = cost.get((pair, "inline")), cost.get((pair, "api"))
+        if a and b:
+            print(f"| {pair} | {a:.0f} | {b:.0f} | {b / a:.2f} |")
+    print()
+
+
+if __name__ == "__main__":
+    main(sys.argv[1], int(sys.argv[2]) if len(sys.argv) > 2 else 100000)
