@@ -111,6 +111,9 @@ class Function:
     notes: str | None = None
     args: list = field(default_factory=list)
     rows_of: str | None = None  # id of the function applied row by row
+    report: str | None = None      # C call filling `rows`/`n_rows` (array results)
+    report_row: str | None = None  # th_* row struct with label/value/unit/is_text/text
+    report_max: str | None = None  # C constant: how many rows `rows` holds
 
     @property
     def required_count(self) -> int:
@@ -211,7 +214,7 @@ def load(directory: pathlib.Path) -> Catalogue:
         known = {"name", "id", "summary", "returns", "category", "c", "adapter",
                  "locals", "result", "result_type", "method_used", "reason",
                  "range_note", "example", "notes", "arg", "args_from", "args_drop",
-                 "rows_of", "columns"}
+                 "rows_of", "columns", "report", "report_row", "report_max"}
         extra = set(f) - known
         if extra:
             _err(where, f"unknown keys {sorted(extra)}")
@@ -257,6 +260,8 @@ def load(directory: pathlib.Path) -> Catalogue:
                       method_used=f.get("method_used"), reason=f.get("reason"),
                       range_note=f.get("range_note"), example=f.get("example"),
                       notes=f.get("notes"), rows_of=f.get("rows_of"),
+                      report=f.get("report"), report_row=f.get("report_row"),
+                      report_max=f.get("report_max"),
                       args=f["_args"] if "rows_of" in f else resolve_args(fid, ()))
         _validate_function(fn, where, choices, methods)
         up = fn.name.upper()
@@ -323,7 +328,12 @@ def _validate_function(fn: Function, where: str, choices: dict, methods: dict):
     if fn.result_type not in RESULT_TYPES:
         _err(where, f"result_type must be one of {RESULT_TYPES}")
     if fn.result_type == "array" and fn.adapter is None and fn.rows_of is None:
-        _err(where, "array results need an adapter (or rows_of)")
+        if not (fn.report and fn.report_row and fn.report_max):
+            _err(where, "array results need an adapter, rows_of, or report + report_row + report_max")
+        if not re.match(r"^th_[a-z0-9_]+$", fn.report_row):
+            _err(where, "report_row must be a th_* struct type")
+    elif fn.report or fn.report_row or fn.report_max:
+        _err(where, "report keys belong to array results without an adapter")
     for loc in fn.locals:
         if not C_IDENT.match(str(loc.get("var", ""))) or loc["var"] in RESERVED - IDL_ONLY:
             _err(where, f"bad local variable {loc}")

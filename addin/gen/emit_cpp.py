@@ -119,7 +119,15 @@ def _eval_function(fn: cat.Function, c: cat.Catalogue) -> list:
         return lines
     lines.append(f"    o.status = {fn.c};")
     lines.append("    if (TH_FAILED(o.status)) return;")
-    if fn.result_type == "number":
+    if fn.report:
+        # Labelled rows (label, value or text, unit) filled by a C report
+        # call from the solved locals, returned as a 3-column array.
+        lines.append(f"    {fn.report_row} rows[{fn.report_max}]{{}};")
+        lines.append("    int n_rows = 0;")
+        lines.append(f"    const int report_status = {fn.report};")
+        lines.append("    if (TH_FAILED(report_status)) { o.status = report_status; return; }")
+        lines.append("    o.array = rows_to_array(rows, n_rows);")
+    elif fn.result_type == "number":
         lines.append(f"    o.value = {fn.result};")
     else:
         lines.append(f"    o.text = {fn.result};")

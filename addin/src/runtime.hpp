@@ -114,6 +114,28 @@ double finish_number(const Outcome &o);
 uno::Any finish_text(const Outcome &o);
 uno::Any finish_array(const Outcome &o);
 
+// Labelled report rows (a th_* struct with label, value, unit, is_text and
+// text, as th_tube_report fills them) as a 3-column array: label, value or
+// text, unit. Used by catalogue entries with `report = ...`.
+template <class Row>
+uno::Sequence<uno::Sequence<uno::Any>> rows_to_array(const Row *rows, int n) {
+    if (n < 0) n = 0;
+    uno::Sequence<uno::Sequence<uno::Any>> t(n);
+    auto *out = t.getArray();
+    for (int i = 0; i < n; ++i) {
+        uno::Sequence<uno::Any> r(3);
+        auto *c = r.getArray();
+        c[0] <<= OUString::createFromAscii(rows[i].label ? rows[i].label : "");
+        if (rows[i].is_text)
+            c[1] <<= OUString::createFromAscii(rows[i].text ? rows[i].text : "");
+        else
+            c[1] <<= rows[i].value;
+        c[2] <<= OUString::createFromAscii(rows[i].unit ? rows[i].unit : "");
+        out[i] = r;
+    }
+    return t;
+}
+
 // The generated registry of every catalogue function.
 const FunctionInfo *const *all_functions(int &count);
 const FunctionInfo *find_function(const OUString &name);

@@ -291,6 +291,9 @@ VALUE_CASES = [
 
 ARRAY_CASES = [
     Case("entry state table", "entryStateTable", [1000, 5, 10], array=(2, 6)),
+    # Invented case: water heated in a 22 mm tube with its wall at 70 degC.
+    Case("tube report", "tubeReport",
+         ["water", 288.15, 300000, 0.3, 0.022, 3, "temperature", 343.15], array=(3, 40)),
 ]
 
 

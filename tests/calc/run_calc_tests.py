@@ -132,7 +132,7 @@ def write_workbooks(work: pathlib.Path, display: dict, catalogue: dict) -> dict:
     array_rows = [["case", "table"]]
     for c in ARRAY_CASES:
         base = len(array_rows)
-        args = ";".join(repr(float(a)) for a in c.args)
+        args = ";".join('"%s"' % a if isinstance(a, str) else repr(float(a)) for a in c.args)
         array_rows.append([c.label, F(f"of:={PREFIX}{c.fid.upper()}({args})", matrix=c.array)])
         for _ in range(c.array[1] - 1):
             array_rows.append([None])
@@ -202,9 +202,43 @@ def check_values(rep: Report, lib: th_direct.Lib, rows: list):
             rep.record(f"Calc cell {case.fid}: {case.label}", source, dev, rtol)
 
 
-def check_arrays(rep: Report, lib: th_direct.Lib, rows: list):
+# Report rows checked against libtubeheat's th_tube_solve called directly
+# (tests/workbooks/th_direct_more.py): label in the report -> output id.
+TUBE_REPORT_ROWS = {"Reynolds number Re": "re", "Prandtl number Pr": "pr",
+                    "Darcy friction factor f": "f", "pressure drop p_in - p_out": "dp",
+                    "mean Nusselt number Nu = h D_h/k": "nu", "mean inside coefficient h": "h",
+                    "overall conductance UA": "ua", "number of transfer units NTU = UA/(mdot cp)": "ntu",
+                    "outlet temperature": "t_out", "heat rate into the fluid q": "q",
+                    "wall temperature at the outlet": "t_wall_out"}
+
+
+def check_tube_report(rep: Report, lib_path: str, c, block: list):
+    sys.path.insert(0, str(HERE.parent / "workbooks"))
+    import th_direct_more  # noqa: E402
+    more = th_direct_more.Lib(lib_path)
+    fluid, t_in, p_in, mdot, d, length, wall, wall_value = c.args
+    case = more.tube_case(fluid, t_in, p_in, mdot, d, length, wall, wall_value)
+    seen = set()
+    for row in block:
+        label, value = row[1], row[2]
+        if label in TUBE_REPORT_ROWS:
+            want = more.tube(case, TUBE_REPORT_ROWS[label])
+            g = as_number(value)
+            rep.check(g is not None and th_direct.close(g, want, 1e-13),
+                      f"Array tube report row {label!r}: {value!r} != {want!r}")
+            seen.add(label)
+    rep.check(seen == set(TUBE_REPORT_ROWS), f"tube report rows missing: {set(TUBE_REPORT_ROWS) - seen}")
+    rep.check(any(r[1] == "Nusselt method" and r[2] == "Gnielinski" for r in block),
+              "tube report: method row")
+    rep.check(block[-1][1] == "#N/A", "tube report: rows beyond the report show #N/A")
+
+
+def check_arrays(rep: Report, lib: th_direct.Lib, rows: list, lib_path: str):
     for c in ARRAY_CASES:
         block = rows[c.first_row:c.first_row + c.array[1]]
+        if c.fid == "tubeReport":
+            check_tube_report(rep, lib_path, c, block)
+            continue
         st, info = lib.entry_state("auto", *c.args)
         regime = lib.so.th_regime_name(info.regime).decode()
         want = [("regime", regime),
@@ -343,7 +377,7 @@ def main() -> int:
                            work / "csv")
         timings["recalculate test workbooks and demo.fods"] = time.monotonic() - t0
         check_values(rep, lib, read_csv(out / "calc_values-Values.csv"))
-        check_arrays(rep, lib, read_csv(out / "calc_values-Array.csv"))
+        check_arrays(rep, lib, read_csv(out / "calc_values-Array.csv"), ns.lib)
         check_bad(rep, read_csv(out / "calc_bad_input-Bad.csv"))
         check_demo(rep, read_csv(out / "demo-Demo.csv"))
         check_examples(rep, read_csv(out / "calc_values-Examples.csv"))
