@@ -90,6 +90,13 @@ class Arg:
     def ref(self) -> str | None:
         return self.type.split(":", 1)[1] if ":" in self.type else None
 
+    @property
+    def arrives_as_any(self) -> bool:
+        """UNO type any (not double/string): optional arguments, and numbers
+        that accept the text "inf" (a double parameter would make Calc
+        reject the text before the add-in sees it)."""
+        return self.optional or self.check == "positive_or_inf"
+
 
 @dataclass
 class Function:

@@ -21,7 +21,7 @@ ANY_ROWS = ("::com::sun::star::uno::Sequence< ::com::sun::star::uno::Sequence< "
 def cpp_param(a: cat.Arg) -> str:
     if a.column:
         return f"const {ANY_ROWS} &{a.name}"
-    if a.optional:
+    if a.arrives_as_any:
         return f"const ::com::sun::star::uno::Any &{a.name}"
     if a.kind == "number":
         return f"double {a.name}"

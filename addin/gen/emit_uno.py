@@ -42,7 +42,7 @@ def idl_type(a: cat.Arg) -> str:
         # A range with any cell content, so that text and empty cells stay
         # distinguishable from numbers row by row.
         return "sequence< sequence< any > >"
-    if a.optional:
+    if a.arrives_as_any:
         return "any"
     return "double" if a.kind == "number" else "string"
 

@@ -39,6 +39,7 @@ def resolved_json(c: cat.Catalogue) -> str:
             "result_type": fn.result_type, "rows_of": fn.rows_of,
             "args": [{"name": a.name, "type": a.type, "check": a.check,
                       "optional": a.optional, "default": a.default,
+                      "arrives_as_any": a.arrives_as_any,
                       "unit": a.unit, "column": a.column} for a in fn.args]})
     for k, ch in c.choices.items():
         out["choices"][k] = [{"text": v["text"], "aliases": v["aliases"]} for v in ch.values]

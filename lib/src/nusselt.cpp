@@ -253,6 +253,10 @@ int th_nusselt(int method, const th_conditions *c, th_nusselt_result *out) {
         if (c->duct != TH_DUCT_CIRCLE && th::is_laminar_method(e.method) &&
             e.method != TH_NU_LAMINAR_DEVELOPED)
             rc.require(false, "circular-tube laminar correlation applied to a non-circular duct");
+        // No correlation or solution was fitted to, or validated on, a tube
+        // shorter than its diameter; the entry terms then grow without
+        // bound (Nu ~ (D/L)^(1/3) and faster).
+        rc.require(c->l_over_d >= 1.0, "L/D (or x/D) below 1: shorter than one diameter, beyond every method's data");
         e.nu = th::checked(th::evaluate(e.method, *c, rc, e.f));
         th::need(e.nu > 0.0);
         th_nusselt_result r{};

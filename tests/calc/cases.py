@@ -11,15 +11,25 @@ All inputs are our own scenarios.
 """
 from __future__ import annotations
 
+import csv
+import ctypes as C
 import math
+import pathlib
+import sys
 from dataclasses import dataclass, field
 
 from fluids.core import Prandtl, Reynolds
 from fluids.friction import Churchill_1977, Colebrook, Haaland, Swamee_Jain_1976
 from iapws import IAPWS97
+from scipy.integrate import quad
+from iapws.humidAir import Air, Ma
 from iapws.iapws97 import _PSat_T, _TSat_P
 
 import th_direct as D
+
+REPO = pathlib.Path(__file__).resolve().parents[2]
+sys.path.insert(0, str(REPO / "tests" / "workbooks"))
+import th_direct_more as M  # noqa: E402  (tube solver and property sets)
 
 EMPTY = object()  # a reference to an empty cell
 
@@ -289,11 +299,257 @@ VALUE_CASES = [
          [(_TSat_P(0.101325), 1e-9, "python3-iapws iapws97._TSat_P (IF97 region 4)")]),
 ]
 
+# ------------------------------------------------ properties, entry, tubes
+def _ref_rows(name: str) -> list:
+    """Rows of a reference CSV in tests/reference/ ('#' lines skipped)."""
+    with open(REPO / "tests" / "reference" / name, newline="") as fh:
+        lines = [ln for ln in fh if not ln.startswith("#")]
+    return [{k: float(v) for k, v in r.items()} for r in csv.DictReader(lines)]
+
+
+def _props(L, fluid, t, p, what):
+    out = M.FluidProps()
+    st = getattr(L.so, f"th_{fluid}_props")(t, p, C.byref(out))
+    return st, getattr(out, what)
+
+
+def _eigen(L, wall, n, which):
+    lam, coef = C.c_double(), C.c_double()
+    fn = L.so.th_graetz_eigen
+    fn.argtypes = [C.c_int, C.c_int, C.POINTER(C.c_double), C.POINTER(C.c_double)]
+    st = fn(D.WALL[wall], n, C.byref(lam), C.byref(coef))
+    return st, (lam if which == "lambda" else coef).value
+
+
+def _duct(L, duct, ratio, which):
+    fre, nut, nuh = C.c_double(), C.c_double(), C.c_double()
+    fn = L.so.th_duct_laminar
+    fn.argtypes = [C.c_int, C.c_double] + [C.POINTER(C.c_double)] * 3
+    st = fn(D.DUCT[duct], ratio, C.byref(fre), C.byref(nut), C.byref(nuh))
+    return st, {"fre": fre, "T": nut, "H": nuh}[which].value
+
+
+ANNULUS = {"inner": 0, "outer": 1}   # th_annulus_wall in tubeheat.h
+
+
+def _annulus(L, ratio, heated, wall):
+    fre, nut, nuh = C.c_double(), C.c_double(), C.c_double()
+    fn = L.so.th_annulus_laminar
+    fn.argtypes = [C.c_double, C.c_int] + [C.POINTER(C.c_double)] * 3
+    st = fn(ratio, ANNULUS[heated], C.byref(fre), C.byref(nut), C.byref(nuh))
+    return st, (nut if wall == "T" else nuh).value
+
+
+# Invented tube scenario (also row 1 of tests/reference/tube_water_iapws.csv):
+# water at 288.15 K, 3 bar, 0.3 kg/s in a 22 mm smooth tube 3 m long whose
+# wall is held at 343.15 K.
+TUBE = ["water", 288.15, 300000, 0.3, 0.022, 3, "temperature", 343.15]
+TUBE_REF = next(r for r in _ref_rows("tube_water_iapws.csv")
+                if r["d"] == 0.022 and r["length"] == 3 and r["mdot"] == 0.3
+                and r["t_in"] == 288.15 and r["kind"] == 0 and r["t_lim"] == 343.15)
+TUBE_ITERATIONS = 14  # TH_TUBE_OUT_ITERATIONS in tubeheat.h
+
+
+def _tube(L, which, args=TUBE):
+    case = L.tube_case(*args)
+    res = L._result_type()
+    st = L.so.th_tube_solve(C.byref(case), res)
+    v = C.c_double()
+    L.so.th_tube_result_value(res, M.OUT.get(which, TUBE_ITERATIONS), C.byref(v))
+    if which == "regime":
+        return st, L.so.th_regime_name(int(v.value)).decode()
+    if which == "method":
+        return st, L.so.th_nusselt_method_name(int(v.value)).decode()
+    return st, v.value
+
+
+def _tube_inverse(L, kind, target, args):
+    case = L.tube_case(*args)
+    res = L._result_type()
+    out = C.c_double()
+    fn = getattr(L.so, {"length": "th_tube_length_for_outlet", "flow": "th_tube_flow_for_outlet",
+                        "flow_duty": "th_tube_flow_for_duty"}[kind])
+    st = fn(C.byref(case), target, C.byref(out), res)
+    return st, out.value
+
+
+# Whole-tube reference values (python3-iapws + python3-fluids + scipy, written
+# independently of tubeheat; tests/reference/gen_tube_water_iapws.py).
+# The unit tests hold the library to 1e-8 K and 1e-9 relative against them.
+TR = TUBE_REF
+TUBE_SRC = "tube_water_iapws.csv (python3-iapws/fluids/scipy, independent solution)"
+# Uniform wall temperature: NTU = ln((Tw - Tin)/(Tw - Tout)) and
+# UA = q / LMTD (analytic identities), with T_out and q from the reference.
+NTU_REF = math.log((TR["t_lim"] - TR["t_in"]) / (TR["t_lim"] - TR["t_out"]))
+UA_REF = TR["q"] / ((TR["t_out"] - TR["t_in"]) / NTU_REF)
+
+# Air: python3-iapws Air (Lemmon et al. 2000 EOS, Lemmon & Jacobsen 2004
+# transport). tubeheat uses the ideal-gas / dilute-gas parts with M =
+# 28.9586 g/mol; python3-iapws uses 28.96546 g/mol, so cp is compared per mole
+# (as tests/reference/gen_air_iapws.py and test_properties_air.cpp do).
+M_AIR = 28.9586e-3
+AIR_T = 300.0
+_air0 = Air()
+AIR_MU0 = Air._visco(0.0, AIR_T)
+AIR_K0 = _air0._thermo(0.0, AIR_T)
+AIR_CP0 = Air(T=AIR_T, P=0.101325).cp0 * Ma / M_AIR  # kJ/(kg K) * g/mol -> J/(mol K) -> J/(kg K)
+AIR_DH_400 = quad(lambda t: Air(T=t, P=0.101325).cp0, 273.15, 400, epsabs=0,
+                  epsrel=1e-12)[0] * Ma / M_AIR       # kJ/kg * g/mol = J/mol -> J/kg
+AIR_SRC = "python3-iapws Air (Lemmon & Jacobsen 2004 dilute gas / Lemmon et al. 2000 ideal part)"
+W20 = IAPWS97(T=293.15, P=0.101325)
+W80 = IAPWS97(T=353.15, P=0.2)
+IF97 = "python3-iapws IAPWS97 (IF97 region 1, R12-08, R15-11)"
+GRAETZ = {(int(r["wall"]), int(r["n"])): r for r in _ref_rows("graetz_scipy.csv")}
+DUCTS = {(int(r["shape"]), r["ratio"]): r for r in _ref_rows("ducts_scipy.csv")}
+
+VALUE_CASES += [
+    # -- properties: water (IAPWS-IF97 + R12-08 + R15-11 via python3-iapws;
+    #    the unit tests hold the library to 1e-9 relative on water_iapws.csv)
+    Case("water enthalpy 80 C, 2 bar", "waterEnthalpy", [353.15, 2e5],
+         lambda L: L.call("th_water_enthalpy", "dd", 353.15, 2e5),
+         [(W80.h * 1000, 1e-9, IF97)]),
+    Case("water viscosity 20 C, 1 atm", "waterViscosity", [293.15, 101325],
+         lambda L: _props(L, "water", 293.15, 101325, "mu"), [(W20.mu, 1e-9, IF97)]),
+    Case("water conductivity 20 C, 1 atm", "waterConductivity", [293.15, 101325],
+         lambda L: _props(L, "water", 293.15, 101325, "k"), [(W20.k, 1e-9, IF97)]),
+    Case("water Prandtl 20 C, 1 atm", "waterPrandtl", [293.15, 101325],
+         lambda L: _props(L, "water", 293.15, 101325, "pr"), [(W20.Prandt, 1e-9, IF97)]),
+    # -- properties: dry air at 300 K, default pressure 1 atm
+    Case("air density 300 K", "airDensity", [AIR_T],
+         lambda L: _props(L, "air", AIR_T, 101325, "rho"),
+         # Real-gas compressibility of air at 300 K, 1 atm is ~3e-4; the
+         # molar masses differ by 2.4e-4: 1e-3 covers both.
+         [(Air(T=AIR_T, P=0.101325).rho, 1e-3, "python3-iapws Air full real-gas EOS (Lemmon et al. 2000)")]),
+    Case("air cp 300 K", "airCp", [AIR_T],
+         lambda L: _props(L, "air", AIR_T, 101325, "cp"), [(AIR_CP0, 1e-9, AIR_SRC)]),
+    Case("air enthalpy 400 K, 1 atm", "airEnthalpy", [400, 101325],
+         lambda L: _props(L, "air", 400, 101325, "h"),
+         # Library zero is 273.15 K: h = integral of the ideal-gas cp0 from
+         # 273.15 K (scipy quad, rel 1e-12), per mole as above.
+         [(AIR_DH_400, 1e-9, AIR_SRC + ", integral of cp0 (scipy quad)")]),
+    Case("air viscosity 300 K", "airViscosity", [AIR_T],
+         lambda L: _props(L, "air", AIR_T, 101325, "mu"), [(AIR_MU0, 1e-9, AIR_SRC)]),
+    Case("air conductivity 300 K", "airConductivity", [AIR_T],
+         lambda L: _props(L, "air", AIR_T, 101325, "k"), [(AIR_K0, 1e-9, AIR_SRC)]),
+    Case("air Prandtl 300 K", "airPrandtl", [AIR_T],
+         lambda L: _props(L, "air", AIR_T, 101325, "pr"),
+         [(AIR_CP0 * AIR_MU0 / AIR_K0, 1e-9, AIR_SRC + ", cp0 mu0 / k0")]),
+    # -- entry region (exact series) and laminar ducts
+    Case("thermal entry local Nu_T far downstream", "entryThermalNu", [1.0, "T", "local"],
+         lambda L: L.call("th_thermal_entry_nusselt", "dii", 1.0, 0, 1),
+         [(3.6567935, 1e-6, "analytic limit Nu_T = 3.6567935 (Shah & London 1978; from memory)")]),
+    # The text "inf" means fully developed (x* and x+ arrive as any).
+    Case("thermal entry local Nu_T, x* = \"inf\"", "entryThermalNu", ["inf", "T", "local"],
+         lambda L: L.call("th_thermal_entry_nusselt", "dii", float("inf"), 0, 1),
+         [(3.6567935, 1e-6, "analytic limit Nu_T = 3.6567935 (Shah & London 1978; from memory)")]),
+    Case("apparent friction, x+ = \"inf\"", "entryFrictionApparent", ["inf"],
+         lambda L: L.call("th_combined_entry_friction", "d", float("inf")),
+         [(64.0, 1e-15, "analytic limit 64 (Hagen-Poiseuille)")]),
+    Case("thermal entry local Nu_H far downstream", "entryThermalNu", [1.0, "H", "local"],
+         lambda L: L.call("th_thermal_entry_nusselt", "dii", 1.0, 1, 1),
+         # series terms beyond the first decay like exp(-2 beta_1^2 x*): < 1e-20 at x* = 1
+         [(48 / 11, 1e-9, "analytic limit Nu_H = 48/11")]),
+    Case("combined entry local Nu_T at x* = 5, Pr 0.7", "entryCombinedNu", [5.0, 0.7, "T", "local"],
+         lambda L: L.call("th_combined_entry_nusselt", "ddii", 5.0, 0.7, 0, 1),
+         # marched solution, 5e-4 as in test_entry_combined.cpp
+         [(3.6567935, 5e-4, "analytic limit Nu_T = 3.6567935 (from memory)")]),
+    Case("apparent friction, x+ = 1e6", "entryFrictionApparent", [1e6],
+         lambda L: L.call("th_combined_entry_friction", "d", 1e6),
+         # f_app Re = 64 + K(inf)/x+ far downstream; K(inf) ~ 1.2 (Shah &
+         # London 1978, from memory) leaves 2e-8 relative at x+ = 1e6.
+         [(64, 1e-7, "analytic Hagen-Poiseuille f Re = 64 (limit x+ -> inf)")]),
+    Case("apparent friction, x+ = 0.01", "entryFrictionApparent", [0.01],
+         lambda L: L.call("th_combined_entry_friction", "d", 0.01)),
+    Case("first Graetz eigenvalue, T", "graetzEigenvalue", ["T", 0],
+         lambda L: _eigen(L, "T", 0, "lambda"),
+         [(GRAETZ[(0, 0)]["lambda_ode"], 1e-11, "scipy ODE shooting (graetz_scipy.csv)")]),
+    Case("third SSH eigenvalue, H", "graetzEigenvalue", ["H", 2],
+         lambda L: _eigen(L, "H", 2, "lambda"),
+         [(GRAETZ[(1, 2)]["lambda_ode"], 1e-11, "scipy ODE shooting (graetz_scipy.csv)")]),
+    Case("first Graetz coefficient, T", "graetzCoefficient", ["T", 0],
+         lambda L: _eigen(L, "T", 0, "coef"),
+         [(GRAETZ[(0, 0)]["coef_ode"], 1e-8, "scipy ODE shooting + norm (graetz_scipy.csv)")]),
+    Case("duct f Re, parallel plates", "ductFrictionRe", ["parallel plates"],
+         lambda L: _duct(L, "parallel plates", 1.0, "fre"),
+         [(96, 1e-13, "analytic plane Poiseuille f Re = 96")]),
+    Case("duct f Re, rectangle 1:2", "ductFrictionRe", ["rectangle", 0.5],
+         lambda L: _duct(L, "rectangle", 0.5, "fre"),
+         # the library uses the Shah & London fit: 1e-3 as in test_ducts.cpp
+         [(DUCTS[(1, 0.5)]["f_re"], 1e-3, "scipy Fourier series (ducts_scipy.csv)")]),
+    Case("duct Nu_T, parallel plates", "ductNu", ["parallel plates", 1, "T"],
+         lambda L: _duct(L, "parallel plates", 1.0, "T"),
+         [(DUCTS[(2, 0.0)]["nu_t"], 1e-6, "scipy shooting (ducts_scipy.csv)"),
+          (7.541, 1e-4, "Shah & London 1978, 7.541 (from memory)")]),
+    Case("duct Nu_H, parallel plates", "ductNu", ["parallel plates", 1, "H"],
+         lambda L: _duct(L, "parallel plates", 1.0, "H"),
+         [(140 / 17, 1e-9, "analytic 140/17 = 8.235")]),
+    Case("annulus Nu_T, inner heated, 0.5", "annulusNu", [0.5, "inner", "T"],
+         lambda L: _annulus(L, 0.5, "inner", "T"),
+         # tabulated and interpolated: 2.5e-3 as in test_ducts.cpp
+         [(DUCTS[(3, 0.5)]["nu_t"], 2.5e-3, "scipy ODE solution (ducts_scipy.csv)")]),
+    Case("annulus Nu_H, outer heated, 0.5", "annulusNu", [0.5, "outer", "H"],
+         lambda L: _annulus(L, 0.5, "outer", "H"),
+         [(DUCTS[(4, 0.5)]["nu_h"], 2.5e-3, "scipy quadrature (ducts_scipy.csv)")]),
+    # -- whole tube (same scenario for every output)
+    Case("tube outlet T", "tubeTOut", TUBE, lambda L: _tube(L, "t_out"),
+         [(TR["t_out"], 1e-10, TUBE_SRC)]),   # 1e-8 K absolute in the unit test = 3e-11 relative
+    Case("tube duty", "tubeDuty", TUBE, lambda L: _tube(L, "q"), [(TR["q"], 1e-9, TUBE_SRC)]),
+    Case("tube h", "tubeH", TUBE, lambda L: _tube(L, "h"), [(TR["h"], 1e-9, TUBE_SRC)]),
+    Case("tube Nu", "tubeNu", TUBE, lambda L: _tube(L, "nu")),
+    Case("tube Re", "tubeRe", TUBE, lambda L: _tube(L, "re"), [(TR["re"], 1e-9, TUBE_SRC)]),
+    Case("tube regime", "tubeRegime", TUBE, lambda L: _tube(L, "regime"),
+         [("turbulent", 0, "Re of tube_water_iapws.csv > 10000, thresholds in tubeheat.h (common practice)")]),
+    Case("tube friction", "tubeFriction", TUBE, lambda L: _tube(L, "f"),
+         [(Colebrook(TR["re"], 0), 1e-9, "python3-fluids Colebrook at the reference Re, smooth tube")]),
+    Case("tube pressure drop", "tubeDp", TUBE, lambda L: _tube(L, "dp"), [(TR["dp"], 1e-9, TUBE_SRC)]),
+    Case("tube wall T at inlet", "tubeTWallIn", TUBE, lambda L: _tube(L, "t_wall_in"),
+         [(343.15, 1e-13, "analytic: uniform wall temperature given"), (TR["t_wall_in"], 1e-10, TUBE_SRC)]),
+    Case("tube wall T at outlet", "tubeTWallOut", TUBE, lambda L: _tube(L, "t_wall_out"),
+         [(TR["t_wall_out"], 1e-10, TUBE_SRC)]),
+    Case("tube UA", "tubeUa", TUBE, lambda L: _tube(L, "ua"),
+         [(UA_REF, 1e-8, TUBE_SRC + " + analytic UA = q/LMTD")]),
+    Case("tube NTU", "tubeNtu", TUBE, lambda L: _tube(L, "ntu"),
+         [(NTU_REF, 1e-8, TUBE_SRC + " + analytic NTU = ln(dT_in/dT_out)")]),
+    Case("tube method", "tubeMethod", TUBE, lambda L: _tube(L, "method"),
+         [("Gnielinski", 0, "auto choice for turbulent flow documented in tubeheat.h")]),
+    Case("tube iterations", "tubeIterations", TUBE, lambda L: _tube(L, "iterations")),
+    # -- inverse design: targets from the reference solution, so the answer
+    #    is the reference's own input (root-search tolerance: the unit tests
+    #    hold round trips to 1e-7 K; 1e-6 relative on L and mdot covers it).
+    # (the direct call starts from the catalogue's default guesses:
+    #  lengthGuess 1 m, flowGuess 0.1 kg/s)
+    Case("tube length for outlet T", "tubeLengthForTOut",
+         [TR["t_out"], "water", 288.15, 300000, 0.3, 0.022, "temperature", 343.15],
+         lambda L: _tube_inverse(L, "length", TR["t_out"],
+                                 ["water", 288.15, 300000, 0.3, 0.022, 1.0, "temperature", 343.15]),
+         [(3.0, 1e-6, TUBE_SRC + " (input length)")]),
+    Case("tube flow for outlet T", "tubeFlowForTOut",
+         [TR["t_out"], "water", 288.15, 300000, 0.022, 3, "temperature", 343.15],
+         lambda L: _tube_inverse(L, "flow", TR["t_out"],
+                                 ["water", 288.15, 300000, 0.1, 0.022, 3, "temperature", 343.15]),
+         [(0.3, 1e-6, TUBE_SRC + " (input mass flow)")]),
+    Case("tube flow for duty", "tubeFlowForDuty",
+         [TR["q"], "water", 288.15, 300000, 0.022, 3, "temperature", 343.15],
+         lambda L: _tube_inverse(L, "flow_duty", TR["q"],
+                                 ["water", 288.15, 300000, 0.1, 0.022, 3, "temperature", 343.15]),
+         [(0.3, 1e-6, TUBE_SRC + " (input mass flow)")]),
+]
+
+# nusseltTable: Re and Pr columns as inline arrays (lists); every row is
+# compared with th_nusselt called directly (1e-13) and with Gnielinski's
+# formula evaluated here (1e-9).
+NU_TABLE_RE = [1e4, 2e4, 5e4, 1e5]
+NU_TABLE_PR = [0.7, 5, 5, 20]
+
 ARRAY_CASES = [
     Case("entry state table", "entryStateTable", [1000, 5, 10], array=(2, 6)),
     # Invented case: water heated in a 22 mm tube with its wall at 70 degC.
     Case("tube report", "tubeReport",
          ["water", 288.15, 300000, 0.3, 0.022, 3, "temperature", 343.15], array=(3, 40)),
+    Case("Nusselt table, Gnielinski", "nusseltTable", ["Gnielinski", NU_TABLE_RE, NU_TABLE_PR],
+         array=(1, len(NU_TABLE_RE)),
+         ext=[(gnielinski(r, p), 1e-9, "Gnielinski (1976) with Petukhov f, evaluated here")
+              for r, p in zip(NU_TABLE_RE, NU_TABLE_PR)]),
 ]
 
 

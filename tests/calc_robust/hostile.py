@@ -134,9 +134,11 @@ class Row:
 def arg_class(a: dict) -> str:
     if a.get("column"):
         return "CN"
+    # What Calc does with an argument depends on its UNO type: any (optional
+    # ones, and numbers taking the text "inf") or double/string.
     if a["type"] == "number":
-        return "ON" if a["optional"] else "RN"
-    return "OT" if a["optional"] else "RT"
+        return "ON" if a["arrives_as_any"] else "RN"
+    return "OT" if a["arrives_as_any"] else "RT"
 
 
 def passes(check: str, v: float) -> bool:
@@ -374,8 +376,12 @@ def rows_for_function(fn: dict, catalogue: dict, value_cases: list,
     # Argument counts: Calc refuses the call itself.
     req = sum(1 for a in fn["args"] if not a["optional"])
     if req > 0:
+        # Calc refuses a call missing a double/string parameter (Err:504);
+        # a missing any parameter reaches the add-in, which says so (Err:502).
+        missing_any = fn["args"][req - 1]["arrives_as_any"]
         rows.append(Row(f"{fn['name']} too few arguments", fn, "too_few", base[:req - 1],
-                        Expect(cell="Err:504", status="10", why=ERR502, note="gap 4")))
+                        Expect(cell="Err:502" if missing_any else "Err:504", status="10",
+                               why=ERR502, note="" if missing_any else "gap 4")))
     rows.append(Row(f"{fn['name']} too many arguments", fn, "too_many", base + [1.0],
                     Expect(cell="Err:504", status="10",
                            why=f"{ERR502}{fn['name']} takes at most")))

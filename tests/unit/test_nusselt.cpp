@@ -366,3 +366,18 @@ TEST_CASE("nusselt: Shah fits against the exact thermal-entry series", "[nusselt
         record(k.name, "exact thermal-entry series (analytic); Shah & London 1978 stated fit accuracy (from memory)", worst, k.tol);
     }
 }
+
+TEST_CASE("nusselt: lengths below one diameter warn for every method", "[nusselt][range]") {
+    // Source: the published ranges; no method covers L/D < 1 (Hausen,
+    // Gnielinski and the Shah fits were all fitted on longer tubes).
+    th_nusselt_result r{};
+    for (int m = 0; m < TH_NU_METHOD_COUNT; ++m) {
+        th_conditions c = base(m == TH_NU_LIQUID_METAL ? 1e5 : 1000.0, m == TH_NU_LIQUID_METAL ? 0.01 : 5.0);
+        c.l_over_d = 1e-300;
+        c.entry = (m == TH_NU_COMBINED_ENTRY_NUMERIC || m == TH_NU_SIEDER_TATE_LAMINAR) ? TH_ENTRY_COMBINED : TH_ENTRY_THERMAL;
+        const int s = th_nusselt(m, &c, &r);
+        INFO("method " << m);
+        CHECK((s == TH_WARN_RANGE || TH_FAILED(s)));
+        if (s == TH_WARN_RANGE) CHECK(std::isfinite(r.nu));
+    }
+}
