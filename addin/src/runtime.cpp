@@ -8,6 +8,7 @@
 #include <rtl/ustrbuf.hxx>
 
 #include <cctype>
+#include <charconv>
 #include <cmath>
 #include <cstdio>
 #include <limits>
@@ -42,6 +43,24 @@ std::string normalised(const std::string &s) {
         out += static_cast<char>(std::tolower(static_cast<unsigned char>(ch)));
     }
     return out;
+}
+
+// Text that is exactly one number in the C locale ("20000", " 1.5e-3 "):
+// Calc converts such text itself for double parameters, so the add-in does
+// the same for the parameters that arrive as any, and cell and companions
+// agree.
+bool numeric_text(const std::string &s, double &v) {
+    std::size_t b = 0, e = s.size();
+    while (b < e && std::isspace(static_cast<unsigned char>(s[b]))) ++b;
+    while (e > b && std::isspace(static_cast<unsigned char>(s[e - 1]))) --e;
+    if (b == e) return false;
+    const char *first = s.data() + b;
+    if (*first == '+') ++first;  // from_chars takes no leading '+'
+    double d = 0.0;
+    const auto r = std::from_chars(first, s.data() + e, d);
+    if (r.ec != std::errc() || r.ptr != s.data() + e || !std::isfinite(d)) return false;
+    v = d;
+    return true;
 }
 
 // A 1x1 range arrives as a nested sequence: treat it as its single value.
@@ -123,6 +142,15 @@ bool Args::number(int i, Check check, double &v) {
         if (check == Check::positive_or_inf &&
             (n == "inf" || n == "infinite" || n == "infinity")) {
             v = std::numeric_limits<double>::infinity();
+            return true;
+        }
+        double parsed = 0.0;
+        if (numeric_text(utf8(s), parsed)) {
+            if (!passes(check, parsed))
+                return reject(i, TH_ERR_INPUT, false,
+                              std::string("must be ") + describe_check(check) +
+                                  "; got " + got_text(a));
+            v = parsed;
             return true;
         }
         return reject(i, TH_ERR_INPUT, true,
