@@ -20,10 +20,8 @@ Prints the time each stage took. Exit status 0 only when every check passed.
 from __future__ import annotations
 
 import argparse
-import csv
 import json
 import math
-import os
 import pathlib
 import re
 import sys
@@ -40,29 +38,12 @@ import lo_headless  # noqa: E402
 import th_direct  # noqa: E402
 import th_direct_more  # noqa: E402  (tests/workbooks: superset with the tube solver)
 from cases import ARRAY_CASES, BAD_CASES, EMPTY, VALUE_CASES, RangeRef, Raw  # noqa: E402
+from check_report import Report, as_number, read_csv  # noqa: E402
 from fods import F  # noqa: E402
 
 PREFIX = "ORG.TUBEHEAT.CALCFUNCTIONS."
 FIRST_INPUT_COL = 4  # E
 RANGE_BLOCK = "[.Z1:.AA2]"  # 2 x 2 numbers on every sheet (RangeRef)
-
-
-class Report:
-    def __init__(self):
-        self.failures: list[str] = []
-        self.checks = 0
-        self.log = os.environ.get("TH_VALIDATION_LOG") or None
-
-    def check(self, ok: bool, what: str):
-        self.checks += 1
-        if not ok:
-            self.failures.append(what)
-
-    def record(self, check: str, source: str, deviation: float, tolerance: float):
-        """One line for docs/validation.md (same format as th_test.hpp)."""
-        if self.log:
-            with open(self.log, "a", encoding="utf-8") as fh:
-                fh.write(f"{check}\t{source}\t{deviation:.3g}\t{tolerance:.3g}\trelative\n")
 
 
 def build_row(display: dict, case, row: int) -> list:
@@ -162,19 +143,6 @@ def write_workbooks(work: pathlib.Path, display: dict, catalogue: dict) -> dict:
            F(f"of:={PREFIX}REGIME([.E2])")]]
     fods.write(paths["round"], {"Round": rt})
     return paths
-
-
-def read_csv(path: pathlib.Path) -> list:
-    with open(path, newline="", encoding="utf-8") as fh:
-        return list(csv.reader(fh))
-
-
-def as_number(text: str):
-    try:
-        v = float(text)
-    except ValueError:
-        return None
-    return v if math.isfinite(v) else None
 
 
 # What a cell shows for a failed library status (addin/catalogue/FORMAT.md).

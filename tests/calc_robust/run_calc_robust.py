@@ -27,10 +27,7 @@ from __future__ import annotations
 
 import argparse
 import collections
-import csv
 import json
-import math
-import os
 import pathlib
 import re
 import sys
@@ -46,6 +43,7 @@ sys.path.insert(0, str(ROOT / "tests" / "calc"))
 import fods  # noqa: E402
 import hostile as H  # noqa: E402
 import lo_headless  # noqa: E402
+from check_report import Report, as_number, read_csv  # noqa: E402
 from fods import F  # noqa: E402
 
 PREFIX = "ORG.TUBEHEAT.CALCFUNCTIONS."
@@ -53,17 +51,6 @@ FIRST_INPUT = 5                  # column F
 WHOLE_NUMBERS, WHOLE_TEXTS = 60, 61   # columns BI, BJ: whole-column sources
 ERR_RANGE = 62                        # columns BK:BL: a number and an error
 HEADER = ["case", "kind", "result", "TH.STATUS", "TH.WHY", "inputs..."]
-
-
-class Report:
-    def __init__(self):
-        self.failures: list[str] = []
-        self.checks = 0
-
-    def check(self, ok: bool, what: str):
-        self.checks += 1
-        if not ok:
-            self.failures.append(what)
 
 
 def load_value_cases() -> list:
@@ -200,19 +187,6 @@ def build_round(catalogue: dict, value_cases: list) -> list:
 
 
 # ------------------------------------------------------------ checks
-def read_csv(path: pathlib.Path) -> list:
-    with open(path, newline="", encoding="utf-8") as fh:
-        return list(csv.reader(fh))
-
-
-def as_number(text: str):
-    try:
-        v = float(text)
-    except ValueError:
-        return None
-    return v if math.isfinite(v) else None
-
-
 def is_error(text: str) -> bool:
     return text.startswith(("Err:", "#"))
 

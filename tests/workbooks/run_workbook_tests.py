@@ -23,7 +23,6 @@ from __future__ import annotations
 import argparse
 import csv
 import math
-import os
 import pathlib
 import re
 import shutil
@@ -40,28 +39,11 @@ sys.path.insert(0, str(ROOT / "workbooks"))
 import expected  # noqa: E402
 import generate  # noqa: E402  (workbooks/generate.py)
 import lo_headless  # noqa: E402
+from check_report import Report  # noqa: E402
 import th_direct_more  # noqa: E402
 from template import CAUTION, PREFIX  # noqa: E402
 
 ERRORS = ("Err:", "#NAME?", "#VALUE!", "#NUM!", "#DIV/0!", "#N/A", "#REF!", "###")
-
-
-class Report:
-    def __init__(self):
-        self.failures: list = []
-        self.checks = 0
-        self.log = os.environ.get("TH_VALIDATION_LOG") or None
-
-    def check(self, ok: bool, what: str):
-        self.checks += 1
-        if not ok:
-            self.failures.append(what)
-
-    def record(self, check: str, source: str, deviation: float, tolerance: float):
-        """One line for docs/validation.md (the format of tests/unit/th_test.hpp)."""
-        if self.log:
-            with open(self.log, "a", encoding="utf-8") as fh:
-                fh.write(f"{check}\t{source}\t{deviation:.3g}\t{tolerance:.3g}\trelative\n")
 
 
 def number(text: str):
