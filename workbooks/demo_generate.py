@@ -39,7 +39,14 @@ INPUTS = [
     ("k", "water conductivity", 0.615, "W/(m K)", "approx. at 30 C"),
     ("cp", "water specific heat", 4178.0, "J/(kg K)", "approx. at 30 C"),
     ("t_target", "wanted outlet temperature", 333.15, "K", "60 C"),
+    ("p_in", "water inlet pressure", 300000.0, "Pa", "absolute"),
 ]
+
+# The whole tube in one call (TH.TUBE.*): water properties from IAPWS-IF97
+# iterated at the mean bulk temperature, wall temperature iterated for the
+# property correction, steam outside through h_o and the wall.
+TUBE = ('"water";{t_in};{p_in};{mdot};{d_i};{length};"outside";{t_steam};{rough}*{d_i};'
+        '"auto";"one-shot";"circle";0;{h_o};{k_wall};({d_o}-{d_i})/2')
 
 # Results: (key, label, formula template, unit, display name for TH.STATUS or
 # None for a plain Calc formula). {key} is replaced by the cell reference.
@@ -68,6 +75,12 @@ RESULTS = [
     ("check", "check: UA LMTD / q", "={ua}*{lmtd}/{q}", "-", None),
     ("l_need", "length for the wanted outlet", "LENGTHFOROUTLETWALL({t_in};{t_target};{t_steam};{ua}/{length};{mdot};{cp})",
      "m", "TH.LENGTH.FOR.OUTLET.WALL"),
+    ("tube_t_out", "whole tube: outlet temperature", "TUBETOUT(" + TUBE + ")", "K", "TH.TUBE.TOUT"),
+    ("tube_q", "whole tube: heat rate", "TUBEDUTY(" + TUBE + ")", "W", "TH.TUBE.DUTY"),
+    ("tube_h", "whole tube: inside coefficient h", "TUBEH(" + TUBE + ")", "W/(m2 K)", "TH.TUBE.H"),
+    ("tube_dp", "whole tube: pressure drop", "TUBEDP(" + TUBE + ")", "Pa", "TH.TUBE.DP"),
+    ("tube_method", "whole tube: Nusselt method", "TUBEMETHOD(" + TUBE + ")", "", "TH.TUBE.METHOD"),
+    ("tube_iter", "whole tube: iterations", "TUBEITERATIONS(" + TUBE + ")", "-", "TH.TUBE.ITERATIONS"),
 ]
 
 SWEEP_RE = [3000, 6000, 10000, 20000, 50000, 100000]
