@@ -16,6 +16,16 @@ uno::Sequence<uno::Any> row(const char *label, const uno::Any &value) {
     r.getArray()[1] = value;
     return r;
 }
+// th_entry_state and the regime's name; nullptr (with o.status set) when
+// either fails.
+const char *entry_state(Outcome &o, double re, double pr, double x_over_d, int wall,
+                        int method, th_entry_info &info) {
+    o.status = th_entry_state(method, re, pr, x_over_d, wall, &info);
+    if (TH_FAILED(o.status)) return nullptr;
+    const char *regime = th_regime_name(info.regime);
+    if (regime == nullptr) o.status = TH_ERR_INTERNAL;
+    return regime;
+}
 }  // namespace
 
 // TH.ENTRY.STATE: one text for th_entry_state, e.g. "laminar, thermally
@@ -23,13 +33,8 @@ uno::Sequence<uno::Any> row(const char *label, const uno::Any &value) {
 void adapter_entry_state_text(Outcome &o, double re, double pr, double xOverD,
                               int wall, int method) {
     th_entry_info info{};
-    o.status = th_entry_state(method, re, pr, xOverD, wall, &info);
-    if (TH_FAILED(o.status)) return;
-    const char *regime = th_regime_name(info.regime);
-    if (regime == nullptr) {
-        o.status = TH_ERR_INTERNAL;
-        return;
-    }
+    const char *regime = entry_state(o, re, pr, xOverD, wall, method, info);
+    if (regime == nullptr) return;
     const char *state =
         info.hydro_developed && info.thermal_developed ? "fully developed"
         : !info.hydro_developed && !info.thermal_developed
@@ -43,13 +48,8 @@ void adapter_entry_state_text(Outcome &o, double re, double pr, double xOverD,
 void adapter_entry_state_table(Outcome &o, double re, double pr, double xOverD,
                                int wall, int method) {
     th_entry_info info{};
-    o.status = th_entry_state(method, re, pr, xOverD, wall, &info);
-    if (TH_FAILED(o.status)) return;
-    const char *regime = th_regime_name(info.regime);
-    if (regime == nullptr) {
-        o.status = TH_ERR_INTERNAL;
-        return;
-    }
+    const char *regime = entry_state(o, re, pr, xOverD, wall, method, info);
+    if (regime == nullptr) return;
     uno::Sequence<uno::Sequence<uno::Any>> t(6);
     auto *rows = t.getArray();
     rows[0] = row("regime", text(regime));

@@ -1,5 +1,8 @@
 // Bad input and out-of-range states for every property function: the right
 // code, and outputs left untouched on error; warnings write finite values.
+// Source of the limits: the validity ranges stated in the releases (IAPWS
+// R7-97 region 1 and 4, R12-08, R15-11) and in tubeheat.h's property
+// section; the expected codes are the API contract of tubeheat.h.
 #include "th_test.hpp"
 
 #include <cmath>

@@ -1,6 +1,8 @@
 // test_tube_cases.hpp - cases shared by the whole-tube tests
 // (test_tube_*.cpp). The scenarios are invented test data, not taken from
-// any published problem.
+// any published problem; the REQUIREs here only check that a case is set
+// up (source: the API contract in tubeheat.h). The reference values the
+// tests compare against are named in each test file.
 #ifndef TEST_TUBE_CASES_HPP
 #define TEST_TUBE_CASES_HPP
 
