@@ -1,6 +1,7 @@
 // friction.cpp - Darcy friction factors and pressure drop.
 #include "friction_internal.hpp"
 #include "internal.hpp"
+#include "method_names.hpp"
 
 #include <boost/math/constants/constants.hpp>
 #include <boost/math/special_functions/lambert_w.hpp>
@@ -111,12 +112,8 @@ double friction(int method, double re, double rr, range_check &rc) {
 }  // namespace th
 
 namespace {
-struct method_name {
-    int id;
-    const char *name;
-};
 // First entry per id is the display name; later ones are aliases.
-constexpr method_name friction_names[] = {
+constexpr th::method_name friction_names[] = {
     {TH_F_AUTO, "auto"},
     {TH_F_LAMINAR, "laminar"},
     {TH_F_LAMINAR, "Hagen-Poiseuille"},
@@ -128,6 +125,7 @@ constexpr method_name friction_names[] = {
     {TH_F_CHURCHILL, "Churchill 1977"},
     {TH_F_PETUKHOV, "Petukhov"},
 };
+constexpr auto friction_display = th::index_names<TH_F_METHOD_COUNT>(friction_names);
 }  // namespace
 
 extern "C" {
@@ -189,22 +187,9 @@ int th_pressure_drop_mass_flow(int method, double mdot, double d, double length,
 }
 
 int th_friction_method_from_name(const char *name, int *method) {
-    return guard([&] {
-        need_out(method);
-        need(name != nullptr);
-        for (const auto &m : friction_names)
-            if (th::name_matches(name, m.name)) {
-                *method = m.id;
-                return TH_OK;
-            }
-        th::fail(TH_ERR_METHOD);
-    });
+    return th::method_from_name(friction_names, name, method);
 }
 
-const char *th_friction_method_name(int method) {
-    for (const auto &m : friction_names)
-        if (m.id == method) return m.name;
-    return nullptr;
-}
+const char *th_friction_method_name(int method) { return friction_display(method); }
 
 }  // extern "C"

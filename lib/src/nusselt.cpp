@@ -1,6 +1,7 @@
 // nusselt.cpp - th_nusselt(): validation of the conditions, the dispatch to
 // the method chosen by the caller, the automatic choice, and method names.
 #include "correlations.hpp"
+#include "method_names.hpp"
 #include "entry_internal.hpp"
 
 #include <cmath>
@@ -9,10 +10,6 @@
 namespace th {
 namespace {
 
-struct method_name {
-    int id;
-    const char *name;
-};
 // First entry per id is the display name; later ones are accepted aliases.
 constexpr method_name nusselt_names[] = {
     {TH_NU_AUTO, "auto"},
@@ -41,24 +38,8 @@ constexpr method_name nusselt_names[] = {
     {TH_NU_COMBINED_ENTRY_NUMERIC, "combined entry"},
 };
 
-// Display name by method id, i.e. the first entry of each id above. Every
-// th_nusselt() call names its method in the result, so this is a table
-// indexed by id (built at compile time) rather than a search of the list.
-struct names_by_id {
-    const char *name[TH_NU_METHOD_COUNT];
-};
-constexpr names_by_id make_names_by_id() {
-    names_by_id t{};
-    for (const auto &m : nusselt_names)
-        if (m.id >= 0 && m.id < TH_NU_METHOD_COUNT && t.name[m.id] == nullptr)
-            t.name[m.id] = m.name;
-    return t;
-}
-constexpr names_by_id display_names = make_names_by_id();
-
-const char *display_name(int id) {
-    return id >= 0 && id < TH_NU_METHOD_COUNT ? display_names.name[id] : nullptr;
-}
+// Every th_nusselt() call names its method, so display names are indexed.
+constexpr auto display_name = index_names<TH_NU_METHOD_COUNT>(nusselt_names);
 
 void validate(const th_conditions &c) {
     need_positive(c.re);
@@ -272,16 +253,7 @@ int th_nusselt(int method, const th_conditions *c, th_nusselt_result *out) {
 }
 
 int th_nusselt_method_from_name(const char *name, int *method) {
-    return th::guard([&] {
-        th::need_out(method);
-        th::need(name != nullptr);
-        for (const auto &m : th::nusselt_names)
-            if (th::name_matches(name, m.name)) {
-                *method = m.id;
-                return TH_OK;
-            }
-        th::fail(TH_ERR_METHOD);
-    });
+    return th::method_from_name(th::nusselt_names, name, method);
 }
 
 const char *th_nusselt_method_name(int method) { return th::display_name(method); }

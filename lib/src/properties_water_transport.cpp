@@ -10,6 +10,23 @@ using th::guard;
 using th::need_out;
 using th::range_check;
 
+namespace th::water {
+namespace {
+// Conductivity and Prandtl number need the whole state (density for k,
+// cp and mu for Pr) and share the range warnings of the full set: one
+// evaluation, one field written.
+int field_of_all(double t, double p, double *out, double th_fluid_props::*field) {
+    return guard([&] {
+        need_out(out);
+        range_check rc;
+        const th_fluid_props v = all(t, p, rc);
+        *out = v.*field;
+        return rc.status();
+    });
+}
+}  // namespace
+}  // namespace th::water
+
 extern "C" {
 
 int th_water_props(double t, double p, th_fluid_props *out) {
@@ -34,23 +51,11 @@ int th_water_viscosity(double t, double p, double *mu) {
 }
 
 int th_water_conductivity(double t, double p, double *k) {
-    return guard([&] {
-        need_out(k);
-        range_check rc;
-        const th_fluid_props v = th::water::all(t, p, rc);
-        *k = v.k;
-        return rc.status();
-    });
+    return th::water::field_of_all(t, p, k, &th_fluid_props::k);
 }
 
 int th_water_prandtl(double t, double p, double *pr) {
-    return guard([&] {
-        need_out(pr);
-        range_check rc;
-        const th_fluid_props v = th::water::all(t, p, rc);
-        *pr = v.pr;
-        return rc.status();
-    });
+    return th::water::field_of_all(t, p, pr, &th_fluid_props::pr);
 }
 
 }  // extern "C"
