@@ -20,8 +20,7 @@ sys.path.insert(0, str(HERE.parent / "addin" / "tools"))
 
 import fods  # noqa: E402
 from fods import F, Styled  # noqa: E402
-
-P = "ORG.TUBEHEAT.CALCFUNCTIONS."
+from fods import PREFIX as P  # noqa: E402
 
 # Inputs: (key, label, value, unit, note). Cells are referenced by key.
 INPUTS = [

@@ -9,7 +9,16 @@ cell on the same sheet). Standard library only.
 from __future__ import annotations
 
 import math
+import pathlib
+import sys
 from xml.sax.saxutils import escape, quoteattr
+
+sys.path.insert(0, str(pathlib.Path(__file__).resolve().parents[1] / "gen"))
+from catalogue import SERVICE  # noqa: E402  (addin/gen/catalogue.py, the one place)
+
+# How a saved workbook names every add-in call: the UNO service name, upper
+# case, then the method id (e.g. ORG.TUBEHEAT.CALCFUNCTIONS.REYNOLDS).
+PREFIX = SERVICE.upper() + "."
 
 
 class F(str):
@@ -99,6 +108,14 @@ def _cell(value) -> str:
             span = (f' table:number-matrix-columns-spanned="{value.matrix[0]}"'
                     f' table:number-matrix-rows-spanned="{value.matrix[1]}"')
         return f"<table:table-cell{style} table:formula={quoteattr(str(value))}{span}/>"
+    return literal_cell(style, value)
+
+
+def literal_cell(attrs: str, value, extra: str = "") -> str:
+    """A number or text cell (shared with workbooks/tools/odfsheet.py):
+    `attrs` are the cell's attributes, `extra` XML placed before the text
+    (e.g. a chart frame). Numbers are written with repr, so they round-trip
+    exactly; text may hold several lines."""
     if isinstance(value, bool):
         raise TypeError("booleans are not used in these workbooks")
     if isinstance(value, (int, float)):
@@ -106,10 +123,11 @@ def _cell(value) -> str:
         if not math.isfinite(v):
             raise ValueError("non-finite cell value")
         text = repr(v)
-        return (f'<table:table-cell{style} office:value-type="float" office:value="{text}">'
-                f"<text:p>{text}</text:p></table:table-cell>")
-    return (f'<table:table-cell{style} office:value-type="string">'
-            f"<text:p>{escape(str(value))}</text:p></table:table-cell>")
+        return (f'<table:table-cell{attrs} office:value-type="float" office:value="{text}">'
+                f"{extra}<text:p>{text}</text:p></table:table-cell>")
+    lines = "".join(f"<text:p>{escape(line)}</text:p>" for line in str(value).split("\n"))
+    return (f'<table:table-cell{attrs} office:value-type="string">'
+            f"{extra}{lines}</table:table-cell>")
 
 
 def _column_styles(widths) -> str:

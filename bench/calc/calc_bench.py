@@ -53,7 +53,7 @@ import fods  # noqa: E402
 import lo_headless  # noqa: E402
 from fods import F  # noqa: E402
 
-PREFIX = "ORG.TUBEHEAT.CALCFUNCTIONS."
+from fods import PREFIX  # noqa: E402
 
 
 # ------------------------------------------------------------------ inputs

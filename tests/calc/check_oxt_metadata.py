@@ -17,6 +17,10 @@ import sys
 import tempfile
 import xml.etree.ElementTree as ET
 import zipfile
+from pathlib import Path
+
+sys.path.insert(0, str(Path(__file__).resolve().parents[2] / "addin" / "gen"))
+from catalogue import SERVICE  # noqa: E402
 
 ap = argparse.ArgumentParser()
 ap.add_argument("--oxt", required=True)
@@ -42,10 +46,10 @@ with zipfile.ZipFile(ns.oxt) as z, tempfile.TemporaryDirectory() as tmp:
         types = [" ".join(p.strip().split()[1:-1]) for p in m.group(2).split(",") if p.strip()]
         methods[m.group(1)] = (params, types)
     xcu = ET.parse(f"{tmp}/CalcAddIns.xcu").getroot()
-    service = xcu.find(f"node/node[@{OOR}name='org.tubeheat.CalcFunctions']")
+    service = xcu.find(f"node/node[@{OOR}name='{SERVICE}']")
     funcs = service.find("node") if service is not None else None
     if funcs is None:
-        fail.append("CalcAddIns.xcu has no AddInInfo/org.tubeheat.CalcFunctions/AddInFunctions")
+        fail.append(f"CalcAddIns.xcu has no AddInInfo/{SERVICE}/AddInFunctions")
         funcs = []
 
     def prop(node, name):

@@ -41,7 +41,7 @@ from cases import ARRAY_CASES, BAD_CASES, EMPTY, VALUE_CASES, RangeRef, Raw  # n
 from check_report import Report, as_number, read_csv  # noqa: E402
 from fods import F  # noqa: E402
 
-PREFIX = "ORG.TUBEHEAT.CALCFUNCTIONS."
+from fods import PREFIX  # noqa: E402
 FIRST_INPUT_COL = 4  # E
 RANGE_BLOCK = "[.Z1:.AA2]"  # 2 x 2 numbers on every sheet (RangeRef)
 

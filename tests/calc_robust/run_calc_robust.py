@@ -46,7 +46,7 @@ import lo_headless  # noqa: E402
 from check_report import Report, as_number, read_csv  # noqa: E402
 from fods import F  # noqa: E402
 
-PREFIX = "ORG.TUBEHEAT.CALCFUNCTIONS."
+from fods import PREFIX  # noqa: E402
 FIRST_INPUT = 5                  # column F
 WHOLE_NUMBERS, WHOLE_TEXTS = 60, 61   # columns BI, BJ: whole-column sources
 ERR_RANGE = 62                        # columns BK:BL: a number and an error

@@ -17,9 +17,13 @@ template layer (template.py) builds them.
 """
 from __future__ import annotations
 
-import math
+import pathlib
+import sys
 from dataclasses import dataclass, field
 from xml.sax.saxutils import escape, quoteattr
+
+sys.path.insert(0, str(pathlib.Path(__file__).resolve().parents[2] / "addin" / "tools"))
+import fods  # noqa: E402  (addin/tools/fods.py: the shared cell writer)
 
 # ------------------------------------------------------------------ colours
 # Our own palette, chosen for print legibility in colour and in grey.
@@ -357,17 +361,7 @@ def _cell_xml(c: Cell, styles: _Styles, extra: str = "") -> str:
         return f"<table:table-cell{attrs}>{body}</table:table-cell>" if body else f"<table:table-cell{attrs}/>"
     if isinstance(v, Formula):
         return f"<table:table-cell{attrs} table:formula={quoteattr(str(v))}>{extra}</table:table-cell>"
-    if isinstance(v, bool):
-        raise TypeError("booleans are not used in these workbooks")
-    if isinstance(v, (int, float)):
-        x = float(v)
-        if not math.isfinite(x):
-            raise ValueError("non-finite cell value")
-        text = repr(x)
-        return (f'<table:table-cell{attrs} office:value-type="float" office:value="{text}">'
-                f"{extra}<text:p>{text}</text:p></table:table-cell>")
-    lines = "".join(f"<text:p>{escape(line)}</text:p>" for line in str(v).split("\n"))
-    return f'<table:table-cell{attrs} office:value-type="string">{extra}{lines}</table:table-cell>'
+    return fods.literal_cell(attrs, v, extra)
 
 
 def render(sheets: list, footer: str, doc_title: str = "") -> str:

@@ -33,12 +33,15 @@ from dataclasses import dataclass, field
 HERE = pathlib.Path(__file__).resolve().parent
 ROOT = HERE.parents[1]
 sys.path.insert(0, str(ROOT / "addin" / "gen"))
+sys.path.insert(0, str(ROOT / "addin" / "tools"))
 sys.path.insert(0, str(HERE))
 
 import catalogue as _cat  # noqa: E402  (addin/gen/catalogue.py)
 import odfsheet as odf  # noqa: E402
+from fods import col_name as col_letter  # noqa: E402  (addin/tools/fods.py)
+from fods import ref as odf_ref  # noqa: E402
 
-PREFIX = "ORG.TUBEHEAT.CALCFUNCTIONS."
+from fods import PREFIX  # noqa: E402,F401  (also imported from here by the templates)
 WIDTHS = [0.48, 2.32, 0.88, 0.84, 0.84, 0.60, 1.04]   # inches, A..G: 7.0 in
 COL = {"tag": 0, "label": 1, "value": 2, "unit": 3, "degc": 4, "status": 5, "note": 6}
 KELVIN = 273.15
@@ -605,15 +608,3 @@ class Template:
         return odf.render([self.build_sheet()], footer=f"{self.stem}.fods, invented demo data",
                           doc_title=self.title)
 
-
-def col_letter(i: int) -> str:
-    s = ""
-    i += 1
-    while i:
-        i, r = divmod(i - 1, 26)
-        s = chr(65 + r) + s
-    return s
-
-
-def odf_ref(col: int, row: int) -> str:
-    return f"[.{col_letter(col)}{row + 1}]"
