@@ -563,30 +563,45 @@ inline void call_th_pressure_drop_mass_flow(source &s, outcome &o) {
 }
 
 // Method-name lookups: arbitrary text in, and the id <-> name round trip.
-inline void call_th_friction_method_from_name(source &s, outcome &o) {
+// The friction and Nusselt pairs share these two checks.
+using from_name_fn = int (*)(const char *, int *);
+using name_of_fn = const char *(*)(int);
+
+inline void check_method_from_name(source &s, outcome &o, const char *fname, from_name_fn from_name,
+                                   int count) {
     const char *name = s.text();
     out_slot<int> m(s);
-    const int st = th_friction_method_from_name(name, m.ptr());
-    if (!settle("th_friction_method_from_name", st, o, m) || m.is_null()) return;
-    if (m.value() < 0 || m.value() >= TH_F_METHOD_COUNT)
-        violation("th_friction_method_from_name", "returned an unknown method id");
+    const int st = from_name(name, m.ptr());
+    if (!settle(fname, st, o, m) || m.is_null()) return;
+    if (m.value() < 0 || m.value() >= count) violation(fname, "returned an unknown method id");
     o.add_int(m.value());
 }
 
-inline void call_th_friction_method_name(source &s, outcome &o) {
-    const int id = s.choice(TH_F_METHOD_COUNT);
-    const char *n = th_friction_method_name(id);
-    const bool known = id >= 0 && id < TH_F_METHOD_COUNT;
+inline void check_method_name(source &s, outcome &o, const char *fname, name_of_fn name_of,
+                              from_name_fn from_name, int count) {
+    const int id = s.choice(count);
+    const char *n = name_of(id);
+    const bool known = id >= 0 && id < count;
     o.status = TH_OK;
     o.add_ptr(n);
     if (!known) {
-        if (n != nullptr) violation("th_friction_method_name", "non-NULL for an unknown id");
+        if (n != nullptr) violation(fname, "non-NULL for an unknown id");
         return;
     }
-    check_text("th_friction_method_name", n, "NULL for a known id");
+    check_text(fname, n, "NULL for a known id");
     int back = -1;
-    if (th_friction_method_from_name(n, &back) != TH_OK || back != id)
-        violation("th_friction_method_name", "display name does not look up to the same id");
+    if (from_name(n, &back) != TH_OK || back != id)
+        violation(fname, "display name does not look up to the same id");
+}
+
+inline void call_th_friction_method_from_name(source &s, outcome &o) {
+    check_method_from_name(s, o, "th_friction_method_from_name", th_friction_method_from_name,
+                           TH_F_METHOD_COUNT);
+}
+
+inline void call_th_friction_method_name(source &s, outcome &o) {
+    check_method_name(s, o, "th_friction_method_name", th_friction_method_name,
+                      th_friction_method_from_name, TH_F_METHOD_COUNT);
 }
 
 // ---- Nusselt number -------------------------------------------------------------
@@ -645,29 +660,13 @@ inline void call_th_nusselt(source &s, outcome &o) {
 }
 
 inline void call_th_nusselt_method_from_name(source &s, outcome &o) {
-    const char *name = s.text();
-    out_slot<int> m(s);
-    const int st = th_nusselt_method_from_name(name, m.ptr());
-    if (!settle("th_nusselt_method_from_name", st, o, m) || m.is_null()) return;
-    if (m.value() < 0 || m.value() >= TH_NU_METHOD_COUNT)
-        violation("th_nusselt_method_from_name", "returned an unknown method id");
-    o.add_int(m.value());
+    check_method_from_name(s, o, "th_nusselt_method_from_name", th_nusselt_method_from_name,
+                           TH_NU_METHOD_COUNT);
 }
 
 inline void call_th_nusselt_method_name(source &s, outcome &o) {
-    const int id = s.choice(TH_NU_METHOD_COUNT);
-    const char *n = th_nusselt_method_name(id);
-    const bool known = id >= 0 && id < TH_NU_METHOD_COUNT;
-    o.status = TH_OK;
-    o.add_ptr(n);
-    if (!known) {
-        if (n != nullptr) violation("th_nusselt_method_name", "non-NULL for an unknown id");
-        return;
-    }
-    check_text("th_nusselt_method_name", n, "NULL for a known id");
-    int back = -1;
-    if (th_nusselt_method_from_name(n, &back) != TH_OK || back != id)
-        violation("th_nusselt_method_name", "display name does not look up to the same id");
+    check_method_name(s, o, "th_nusselt_method_name", th_nusselt_method_name,
+                      th_nusselt_method_from_name, TH_NU_METHOD_COUNT);
 }
 
 // ---- energy balance -------------------------------------------------------------

@@ -147,25 +147,23 @@ TEST_CASE("properties: water saturation functions, range and bad input",
                         {273.14, TH_ERR_STATE}, {647.1, TH_ERR_STATE},
                         {1000.0, TH_ERR_STATE}, {273.15, TH_OK},
                         {647.096, TH_OK}};
-    for (const auto &c : by_t) {
-        double out = kSentinel;
-        INFO("th_water_saturation_pressure(" << c.x << ")");
-        CHECK(th_water_saturation_pressure(c.x, &out) == c.code);
-        if (TH_FAILED(c.code)) CHECK(out == kSentinel);
-        else CHECK(std::isfinite(out));
-    }
+    // The same code checks for both saturation functions.
+    auto check_all = [](const char *name, int (*fn)(double, double *), const auto &cases) {
+        for (const auto &c : cases) {
+            double out = kSentinel;
+            INFO(name << "(" << c.x << ")");
+            CHECK(fn(c.x, &out) == c.code);
+            if (TH_FAILED(c.code)) CHECK(out == kSentinel);
+            else CHECK(std::isfinite(out));
+        }
+    };
+    check_all("th_water_saturation_pressure", th_water_saturation_pressure, by_t);
     const one by_p[] = {{kNaN, TH_ERR_INPUT},    {kInf, TH_ERR_INPUT},
                         {-1e5, TH_ERR_INPUT},    {0.0, TH_ERR_INPUT},
                         {611.0, TH_ERR_STATE},   {22.065e6, TH_ERR_STATE},
                         {1e9, TH_ERR_STATE},     {611.213, TH_OK},
                         {22.064e6, TH_OK}};
-    for (const auto &c : by_p) {
-        double out = kSentinel;
-        INFO("th_water_saturation_temperature(" << c.x << ")");
-        CHECK(th_water_saturation_temperature(c.x, &out) == c.code);
-        if (TH_FAILED(c.code)) CHECK(out == kSentinel);
-        else CHECK(std::isfinite(out));
-    }
+    check_all("th_water_saturation_temperature", th_water_saturation_temperature, by_p);
 }
 
 TEST_CASE("properties: air states and bad input", "[properties][errors][air]") {
