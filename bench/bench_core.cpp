@@ -13,25 +13,51 @@
 namespace {
 
 // Inputs spread over the range so the branch predictor and the math library
-// see realistic variety; the same array feeds baseline and API.
+// see realistic variety; the same arrays feed baseline and API. Turbulent
+// rows (Re 1.2e4..4.8e6, Pr 0.7..70, mu_b/mu_w 0.5..3, eps/D 0 or
+// 1e-5..1e-2) for the turbulent methods and the friction factors; laminar
+// rows (Re 100..2000, L/D 5..2000) for the laminar ones; transitional
+// (Re 2300..1e4, L/D 5..2000) and liquid-metal (Pr 0.004..0.03) rows for theirs.
 constexpr std::size_t n_inputs = 256;
 struct inputs {
-    std::array<double, n_inputs> re{}, pr{}, rr{};
+    std::array<double, n_inputs> re{}, pr{}, rr{}, mu{}, re_lam{}, ld{}, re_tr{}, pr_lm{};
     inputs() {
         for (std::size_t i = 0; i < n_inputs; ++i) {
-            re[i] = 1.2e4 * std::pow(400.0, double(i) / n_inputs);
-            pr[i] = 0.7 * std::pow(100.0, double((i * 37) % n_inputs) / n_inputs);
-            rr[i] = i % 4 == 0 ? 0.0 : 1e-5 * std::pow(1000.0, double((i * 11) % n_inputs) / n_inputs);
+            const double u = double(i) / n_inputs;
+            const auto shuffled = [i](std::size_t k) { return double((i * k) % n_inputs) / n_inputs; };
+            re[i] = 1.2e4 * std::pow(400.0, u);
+            pr[i] = 0.7 * std::pow(100.0, shuffled(37));
+            rr[i] = i % 4 == 0 ? 0.0 : 1e-5 * std::pow(1000.0, shuffled(11));
+            mu[i] = 0.5 * std::pow(6.0, shuffled(53));
+            re_lam[i] = 100.0 * std::pow(20.0, shuffled(29));
+            ld[i] = 5.0 * std::pow(400.0, shuffled(71));
+            re_tr[i] = 2300.0 + 7700.0 * shuffled(17);
+            pr_lm[i] = 0.004 * std::pow(7.5, shuffled(41));
         }
     }
 };
 const inputs in;
 
-th_conditions conditions_for(std::size_t i) {
+// The rows each method is measured on, as conditions for the API.
+enum class rows { turbulent, laminar, transition, liquid_metal };
+th_conditions conditions_for(rows kind, std::size_t i) {
     th_conditions c;
     th_conditions_init(&c);
     c.re = in.re[i];
     c.pr = in.pr[i];
+    c.mu_ratio = in.mu[i];
+    switch (kind) {
+    case rows::turbulent: break;
+    case rows::laminar:
+        c.re = in.re_lam[i];
+        c.l_over_d = in.ld[i];
+        break;
+    case rows::transition:
+        c.re = in.re_tr[i];
+        c.l_over_d = in.ld[i];
+        break;
+    case rows::liquid_metal: c.pr = in.pr_lm[i]; break;
+    }
     return c;
 }
 
@@ -40,21 +66,55 @@ inline double petukhov_f(double re) {
     const double t = 0.790 * std::log(re) - 1.64;
     return 1.0 / (t * t);
 }
-double db_inline(double re, double pr) { return 0.023 * std::pow(re, 0.8) * std::pow(pr, 0.4); }
-// mu/mu_s = 1 here as in the API's default conditions; the factor is part of
-// the formula, so the baseline pays for it too.
-double st_inline(double re, double pr) {
-    const double mu_ratio = 1.0;
-    return 0.027 * std::pow(re, 0.8) * std::cbrt(pr) * std::pow(mu_ratio, 0.14);
+double db_inline(const th_conditions &c) { return 0.023 * std::pow(c.re, 0.8) * std::pow(c.pr, 0.4); }
+double st_inline(const th_conditions &c) {
+    return 0.027 * std::pow(c.re, 0.8) * std::cbrt(c.pr) * std::pow(c.mu_ratio, 0.14);
 }
-double petukhov_inline(double re, double pr) {
-    const double f8 = petukhov_f(re) / 8.0;
-    return f8 * re * pr / (1.07 + 12.7 * std::sqrt(f8) * (std::pow(pr, 2.0 / 3.0) - 1.0));
+double petukhov_inline(const th_conditions &c) {
+    const double f8 = petukhov_f(c.re) / 8.0;
+    return f8 * c.re * c.pr / (1.07 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
 }
-double gnielinski_inline(double re, double pr) {
-    const double f8 = petukhov_f(re) / 8.0;
-    return f8 * (re - 1000.0) * pr / (1.0 + 12.7 * std::sqrt(f8) * (std::pow(pr, 2.0 / 3.0) - 1.0));
+double gnielinski_inline(const th_conditions &c) {
+    const double f8 = petukhov_f(c.re) / 8.0;
+    return f8 * (c.re - 1000.0) * c.pr / (1.0 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
 }
+// Fully developed, circular, uniform wall temperature: a constant.
+double laminar_developed_inline(const th_conditions &) { return 3.6568; }
+double hausen_inline(const th_conditions &c) {
+    const double gz = c.re * c.pr / c.l_over_d;
+    return 3.66 + 0.0668 * gz / (1.0 + 0.04 * std::pow(gz, 2.0 / 3.0));
+}
+double sieder_tate_laminar_inline(const th_conditions &c) {
+    return 1.86 * std::cbrt(c.re * c.pr / c.l_over_d) * std::pow(c.mu_ratio, 0.14);
+}
+// Shah's mean T fit, combined-entry default conditions of the API aside
+// (the API warns, computes the same fit).
+double shah_inline(const th_conditions &c) {
+    const double xs = c.l_over_d / (c.re * c.pr);
+    const double cr = std::cbrt(xs);
+    return xs <= 0.005 ? 1.615 / cr - 0.7 : (xs < 0.03 ? 1.615 / cr - 0.2 : 3.657 + 0.0499 / xs);
+}
+// Gnielinski's laminar mean composite, T, combined entry.
+double gnielinski_laminar_inline(const th_conditions &c, double re) {
+    const double z = re * c.pr / c.l_over_d;
+    const double t2 = 1.615 * std::cbrt(z) - 0.7;
+    const double t3 = std::pow(2.0 / (1.0 + 22.0 * c.pr), 1.0 / 6.0) * std::sqrt(z);
+    return std::cbrt(3.66 * 3.66 * 3.66 + 0.7 * 0.7 * 0.7 + t2 * t2 * t2 + t3 * t3 * t3);
+}
+double gnielinski_laminar_inline(const th_conditions &c) { return gnielinski_laminar_inline(c, c.re); }
+// Gnielinski 2013: linear in Re between the laminar composite at 2300 and
+// the turbulent value (with its length factor) at 1e4.
+double gnielinski_transition_inline(const th_conditions &c) {
+    const double g = (c.re - 2300.0) / 7700.0;
+    const double lam = gnielinski_laminar_inline(c, 2300.0);
+    const double f8 = petukhov_f(1e4) / 8.0;
+    const double turb = f8 * (1e4 - 1000.0) * c.pr /
+                        (1.0 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0)) *
+                        (1.0 + std::pow(1.0 / c.l_over_d, 2.0 / 3.0));
+    return (1.0 - g) * lam + g * turb;
+}
+double seban_shimazaki_inline(const th_conditions &c) { return 5.0 + 0.025 * std::pow(c.re * c.pr, 0.8); }
+
 double haaland_inline(double re, double rr) {
     const double t = -1.8 * std::log10(std::pow(rr / 3.7, 1.11) + 6.9 / re);
     return 1.0 / (t * t);
@@ -63,6 +123,14 @@ double swamee_jain_inline(double re, double rr) {
     const double t = std::log10(rr / 3.7 + 5.74 / std::pow(re, 0.9));
     return 0.25 / (t * t);
 }
+// Churchill (1977) as usually typed: the powers as written.
+double churchill_inline(double re, double rr) {
+    const double a = std::pow(-2.457 * std::log(std::pow(7.0 / re, 0.9) + 0.27 * rr), 16.0);
+    const double b = std::pow(37530.0 / re, 16.0);
+    return 8.0 * std::pow(std::pow(8.0 / re, 12.0) + 1.0 / std::pow(a + b, 1.5), 1.0 / 12.0);
+}
+double petukhov_friction_inline(double re, double) { return petukhov_f(re); }
+double laminar_friction_inline(double re, double) { return 64.0 / re; }
 // Colebrook baseline: the classic fixed-point iteration (what a spreadsheet
 // user would otherwise type), to 1e-12 relative.
 double colebrook_iterative(double re, double rr) {
@@ -75,20 +143,23 @@ double colebrook_iterative(double re, double rr) {
     return 1.0 / (x * x);
 }
 
-template <class F>
-void run_inline(benchmark::State &st, F f, const std::array<double, n_inputs> &a,
-                const std::array<double, n_inputs> &b) {
+// ---- the loops ---------------------------------------------------------------
+// Every variant reports items (calls or rows) processed, so that
+// bench/ratios.py compares time per call across single calls and arrays.
+void run_inline_nu(benchmark::State &st, double (*f)(const th_conditions &), rows kind) {
+    std::array<th_conditions, n_inputs> cs;
+    for (std::size_t k = 0; k < n_inputs; ++k) cs[k] = conditions_for(kind, k);
     std::size_t i = 0;
     for (auto _ : st) {
-        benchmark::DoNotOptimize(f(a[i], b[i]));
+        benchmark::DoNotOptimize(f(cs[i]));
         i = (i + 1) % n_inputs;
     }
     st.SetItemsProcessed(st.iterations());
 }
 
-void run_nusselt(benchmark::State &st, int method) {
+void run_nusselt(benchmark::State &st, int method, rows kind) {
     std::array<th_conditions, n_inputs> cs;
-    for (std::size_t k = 0; k < n_inputs; ++k) cs[k] = conditions_for(k);
+    for (std::size_t k = 0; k < n_inputs; ++k) cs[k] = conditions_for(kind, k);
     th_nusselt_result r;
     std::size_t i = 0;
     for (auto _ : st) {
@@ -99,33 +170,112 @@ void run_nusselt(benchmark::State &st, int method) {
     st.SetItemsProcessed(st.iterations());
 }
 
+// th_nusselt_array over the same 256 rows per iteration. The rows share
+// every condition but Re, Pr and L/D, so Sieder-Tate (which reads mu_ratio
+// per row in the single-call runs) uses the first row's mu_ratio here.
+void run_nusselt_array(benchmark::State &st, int method, rows kind) {
+    std::array<double, n_inputs> re{}, pr{}, ld{}, nu{};
+    std::array<int, n_inputs> status{};
+    const th_conditions shared = conditions_for(kind, 0);
+    for (std::size_t k = 0; k < n_inputs; ++k) {
+        const th_conditions c = conditions_for(kind, k);
+        re[k] = c.re;
+        pr[k] = c.pr;
+        ld[k] = c.l_over_d;
+    }
+    for (auto _ : st) {
+        benchmark::DoNotOptimize(th_nusselt_array(method, &shared, n_inputs, re.data(), pr.data(),
+                                                  ld.data(), nu.data(), status.data()));
+        benchmark::ClobberMemory();
+    }
+    st.SetItemsProcessed(st.iterations() * static_cast<std::int64_t>(n_inputs));
+}
+
+void run_inline_f(benchmark::State &st, double (*f)(double, double)) {
+    std::size_t i = 0;
+    for (auto _ : st) {
+        benchmark::DoNotOptimize(f(in.re[i], in.rr[i]));
+        i = (i + 1) % n_inputs;
+    }
+    st.SetItemsProcessed(st.iterations());
+}
+
+// Laminar friction is measured on laminar Re, the others on turbulent Re.
+const std::array<double, n_inputs> &re_for(int method) {
+    return method == TH_F_LAMINAR ? in.re_lam : in.re;
+}
+
+void run_inline_f_laminar(benchmark::State &st, double (*f)(double, double)) {
+    std::size_t i = 0;
+    for (auto _ : st) {
+        benchmark::DoNotOptimize(f(in.re_lam[i], 0.0));
+        i = (i + 1) % n_inputs;
+    }
+    st.SetItemsProcessed(st.iterations());
+}
+
 void run_friction(benchmark::State &st, int method) {
+    const auto &re = re_for(method);
+    const bool smooth = method == TH_F_LAMINAR || method == TH_F_PETUKHOV;
     double f = 0.0;
     std::size_t i = 0;
     for (auto _ : st) {
-        benchmark::DoNotOptimize(th_friction_factor(method, in.re[i], in.rr[i], &f));
+        benchmark::DoNotOptimize(th_friction_factor(method, re[i], smooth ? 0.0 : in.rr[i], &f));
         benchmark::DoNotOptimize(f);
         i = (i + 1) % n_inputs;
     }
     st.SetItemsProcessed(st.iterations());
 }
 
+// th_friction_factor_array: one pipe per call, so one roughness for all
+// 256 rows (cycled through the same roughness values call by call).
+void run_friction_array(benchmark::State &st, int method) {
+    const auto &re = re_for(method);
+    const bool smooth = method == TH_F_LAMINAR || method == TH_F_PETUKHOV;
+    std::array<double, n_inputs> f{};
+    std::array<int, n_inputs> status{};
+    std::size_t i = 0;
+    for (auto _ : st) {
+        benchmark::DoNotOptimize(th_friction_factor_array(method, n_inputs, re.data(), smooth ? 0.0 : in.rr[i],
+                                                          f.data(), status.data()));
+        benchmark::ClobberMemory();
+        i = (i + 1) % n_inputs;
+    }
+    st.SetItemsProcessed(st.iterations() * static_cast<std::int64_t>(n_inputs));
+}
+
 }  // namespace
 
-// Naming: <pair>/inline is the baseline, <pair>/api the library call.
-BENCHMARK_CAPTURE(run_inline, dittus_boelter/inline, db_inline, in.re, in.pr);
-BENCHMARK_CAPTURE(run_nusselt, dittus_boelter/api, TH_NU_DITTUS_BOELTER);
-BENCHMARK_CAPTURE(run_inline, sieder_tate/inline, st_inline, in.re, in.pr);
-BENCHMARK_CAPTURE(run_nusselt, sieder_tate/api, TH_NU_SIEDER_TATE);
-BENCHMARK_CAPTURE(run_inline, petukhov/inline, petukhov_inline, in.re, in.pr);
-BENCHMARK_CAPTURE(run_nusselt, petukhov/api, TH_NU_PETUKHOV);
-BENCHMARK_CAPTURE(run_inline, gnielinski/inline, gnielinski_inline, in.re, in.pr);
-BENCHMARK_CAPTURE(run_nusselt, gnielinski/api, TH_NU_GNIELINSKI);
-BENCHMARK_CAPTURE(run_nusselt, nusselt_auto/api, TH_NU_AUTO);
-BENCHMARK_CAPTURE(run_inline, haaland/inline, haaland_inline, in.re, in.rr);
-BENCHMARK_CAPTURE(run_friction, haaland/api, TH_F_HAALAND);
-BENCHMARK_CAPTURE(run_inline, swamee_jain/inline, swamee_jain_inline, in.re, in.rr);
-BENCHMARK_CAPTURE(run_friction, swamee_jain/api, TH_F_SWAMEE_JAIN);
-BENCHMARK_CAPTURE(run_inline, colebrook/inline_iteration, colebrook_iterative, in.re, in.rr);
+// Naming: run_x/<pair>/<variant>; <pair>/inline is the baseline, api the
+// single C call, api_array the array form per row.
+#define TH_NU_BENCH(pair, inline_fn, method, kind)                               \
+    BENCHMARK_CAPTURE(run_inline_nu, pair/inline, inline_fn, kind);              \
+    BENCHMARK_CAPTURE(run_nusselt, pair/api, method, kind);                      \
+    BENCHMARK_CAPTURE(run_nusselt_array, pair/api_array, method, kind)
+TH_NU_BENCH(dittus_boelter, db_inline, TH_NU_DITTUS_BOELTER, rows::turbulent);
+TH_NU_BENCH(sieder_tate, st_inline, TH_NU_SIEDER_TATE, rows::turbulent);
+TH_NU_BENCH(petukhov, petukhov_inline, TH_NU_PETUKHOV, rows::turbulent);
+TH_NU_BENCH(gnielinski, gnielinski_inline, TH_NU_GNIELINSKI, rows::turbulent);
+TH_NU_BENCH(gnielinski_transition, gnielinski_transition_inline, TH_NU_GNIELINSKI_TRANSITION,
+            rows::transition);
+TH_NU_BENCH(liquid_metal_t, seban_shimazaki_inline, TH_NU_LIQUID_METAL, rows::liquid_metal);
+TH_NU_BENCH(laminar_developed, laminar_developed_inline, TH_NU_LAMINAR_DEVELOPED, rows::laminar);
+TH_NU_BENCH(hausen, hausen_inline, TH_NU_HAUSEN, rows::laminar);
+TH_NU_BENCH(sieder_tate_laminar, sieder_tate_laminar_inline, TH_NU_SIEDER_TATE_LAMINAR, rows::laminar);
+TH_NU_BENCH(shah, shah_inline, TH_NU_SHAH, rows::laminar);
+TH_NU_BENCH(gnielinski_laminar, gnielinski_laminar_inline, TH_NU_GNIELINSKI_LAMINAR, rows::laminar);
+BENCHMARK_CAPTURE(run_nusselt, nusselt_auto/api, TH_NU_AUTO, rows::turbulent);
+
+#define TH_F_BENCH(pair, inline_runner, inline_fn, method)                       \
+    BENCHMARK_CAPTURE(inline_runner, pair/inline, inline_fn);                   \
+    BENCHMARK_CAPTURE(run_friction, pair/api, method);                          \
+    BENCHMARK_CAPTURE(run_friction_array, pair/api_array, method)
+TH_F_BENCH(haaland, run_inline_f, haaland_inline, TH_F_HAALAND);
+TH_F_BENCH(swamee_jain, run_inline_f, swamee_jain_inline, TH_F_SWAMEE_JAIN);
+TH_F_BENCH(churchill, run_inline_f, churchill_inline, TH_F_CHURCHILL);
+TH_F_BENCH(petukhov_f, run_inline_f, petukhov_friction_inline, TH_F_PETUKHOV);
+TH_F_BENCH(laminar_f, run_inline_f_laminar, laminar_friction_inline, TH_F_LAMINAR);
+// Colebrook: the exact solution against the iteration a spreadsheet needs.
+BENCHMARK_CAPTURE(run_inline_f, colebrook/inline_iteration, colebrook_iterative);
 BENCHMARK_CAPTURE(run_friction, colebrook/api_lambert_w, TH_F_COLEBROOK);
-BENCHMARK_CAPTURE(run_friction, churchill/api, TH_F_CHURCHILL);
+BENCHMARK_CAPTURE(run_friction_array, colebrook/api_array, TH_F_COLEBROOK);

@@ -5,7 +5,8 @@ Benchmarks are named run_x/<pair>/<variant>; within a pair the variant
 starting with "inline" is the baseline measured in the same run. Reads
 Google Benchmark JSON (--benchmark_out=... --benchmark_out_format=json,
 ideally with --benchmark_repetitions and medians) and prints a Markdown
-table of calls per second and ratios (CPU time, median where present).
+table of calls per second and ratios (CPU time per call or per array row,
+median where present).
 
 Usage: /usr/bin/python3 bench/ratios.py results.json
 """
@@ -25,7 +26,13 @@ def main(path):
         if len(parts) < 3:
             continue
         pair, variant = parts[1], "/".join(parts[2:])
-        rows.setdefault(pair, {})[variant] = b["cpu_time"]
+        # Time per call or row: array benchmarks process many rows per
+        # iteration and report them as items (a rate over CPU time).
+        if b.get("items_per_second"):
+            ns = 1e9 / b["items_per_second"]
+        else:
+            ns = b["cpu_time"]
+        rows.setdefault(pair, {})[variant] = ns
     print("| function | variant | ns per call (CPU) | calls per second | ratio to baseline |")
     print("|---|---|---|---|---|")
     for pair, vs in rows.items():

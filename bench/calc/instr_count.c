@@ -16,9 +16,9 @@
 #include <stdio.h>
 
 #define N_INPUTS 256
-#define N_CALLS 100000
+#define N_CALLS 102400 /* 400 arrays of N_INPUTS rows */
 
-static double in_re[N_INPUTS], in_pr[N_INPUTS], in_rr[N_INPUTS];
+static double in_re[N_INPUTS], in_pr[N_INPUTS], in_rr[N_INPUTS], in_mu[N_INPUTS];
 static th_conditions in_cond[N_INPUTS];
 static volatile double sink;
 
@@ -27,9 +27,11 @@ static void make_inputs(void) {
         in_re[i] = 1.2e4 * pow(400.0, (double)i / N_INPUTS);
         in_pr[i] = 0.7 * pow(100.0, (double)((i * 37) % N_INPUTS) / N_INPUTS);
         in_rr[i] = i % 4 == 0 ? 0.0 : 1e-5 * pow(1000.0, (double)((i * 11) % N_INPUTS) / N_INPUTS);
+        in_mu[i] = 0.5 * pow(6.0, (double)((i * 53) % N_INPUTS) / N_INPUTS);
         th_conditions_init(&in_cond[i]);
         in_cond[i].re = in_re[i];
         in_cond[i].pr = in_pr[i];
+        in_cond[i].mu_ratio = in_mu[i];
     }
 }
 
@@ -38,18 +40,24 @@ static double petukhov_f(double re) {
     const double t = 0.790 * log(re) - 1.64;
     return 1.0 / (t * t);
 }
-static double db_inline(double re, double pr) { return 0.023 * pow(re, 0.8) * pow(pr, 0.4); }
-static double st_inline(double re, double pr) {
-    const double mu_ratio = 1.0;
-    return 0.027 * pow(re, 0.8) * cbrt(pr) * pow(mu_ratio, 0.14);
+static double db_inline(int i) { return 0.023 * pow(in_re[i], 0.8) * pow(in_pr[i], 0.4); }
+static double st_inline(int i) {
+    return 0.027 * pow(in_re[i], 0.8) * cbrt(in_pr[i]) * pow(in_mu[i], 0.14);
 }
-static double petukhov_inline(double re, double pr) {
+static double petukhov_inline(int i) {
+    const double re = in_re[i], pr = in_pr[i];
     const double f8 = petukhov_f(re) / 8.0;
     return f8 * re * pr / (1.07 + 12.7 * sqrt(f8) * (pow(pr, 2.0 / 3.0) - 1.0));
 }
-static double gnielinski_inline(double re, double pr) {
+static double gnielinski_inline(int i) {
+    const double re = in_re[i], pr = in_pr[i];
     const double f8 = petukhov_f(re) / 8.0;
     return f8 * (re - 1000.0) * pr / (1.0 + 12.7 * sqrt(f8) * (pow(pr, 2.0 / 3.0) - 1.0));
+}
+static double churchill_inline(double re, double rr) {
+    const double a = pow(-2.457 * log(pow(7.0 / re, 0.9) + 0.27 * rr), 16.0);
+    const double b = pow(37530.0 / re, 16.0);
+    return 8.0 * pow(pow(8.0 / re, 12.0) + 1.0 / pow(a + b, 1.5), 1.0 / 12.0);
 }
 static double haaland_inline(double re, double rr) {
     const double t = -1.8 * log10(pow(rr / 3.7, 1.11) + 6.9 / re);
@@ -60,12 +68,18 @@ static double swamee_jain_inline(double re, double rr) {
     return 0.25 / (t * t);
 }
 
-#define INLINE_RUN(name, fn, a, b)                                  \
+#define NU_INLINE_RUN(name, fn)                                     \
+    __attribute__((noinline)) static void run_##name##_inline(void) { \
+        double s = 0.0;                                             \
+        for (int k = 0; k < N_CALLS; ++k) s += fn(k % N_INPUTS);    \
+        sink = s;                                                   \
+    }
+#define F_INLINE_RUN(name, fn)                                      \
     __attribute__((noinline)) static void run_##name##_inline(void) { \
         double s = 0.0;                                             \
         for (int k = 0; k < N_CALLS; ++k) {                         \
             const int i = k % N_INPUTS;                             \
-            s += fn(a[i], b[i]);                                    \
+            s += fn(in_re[i], in_rr[i]);                            \
         }                                                           \
         sink = s;                                                   \
     }
@@ -80,6 +94,19 @@ static double swamee_jain_inline(double re, double rr) {
         }                                                           \
         sink = s;                                                   \
     }
+/* The array form: N_CALLS rows in calls of N_INPUTS rows; Sieder-Tate
+ * takes the first row's mu_ratio for all (rows share it). */
+#define NUSSELT_ARRAY_RUN(name, method)                                 \
+    __attribute__((noinline)) static void run_##name##_array(void) {      \
+        static double nu[N_INPUTS];                                     \
+        static int status[N_INPUTS];                                    \
+        double s = 0.0;                                                 \
+        for (int k = 0; k < N_CALLS / N_INPUTS; ++k) {                  \
+            th_nusselt_array(method, &in_cond[0], N_INPUTS, in_re, in_pr, NULL, nu, status); \
+            s += nu[k % N_INPUTS];                                      \
+        }                                                               \
+        sink = s;                                                       \
+    }
 #define FRICTION_RUN(name, method)                                  \
     __attribute__((noinline)) static void run_##name##_api(void) {    \
         double s = 0.0, f = 0.0;                                    \
@@ -90,34 +117,38 @@ static double swamee_jain_inline(double re, double rr) {
         }                                                           \
         sink = s;                                                   \
     }
+#define FRICTION_ARRAY_RUN(name, method)                                \
+    __attribute__((noinline)) static void run_##name##_array(void) {      \
+        static double f[N_INPUTS];                                      \
+        static int status[N_INPUTS];                                    \
+        double s = 0.0;                                                 \
+        for (int k = 0; k < N_CALLS / N_INPUTS; ++k) {                  \
+            th_friction_factor_array(method, N_INPUTS, in_re, in_rr[k % N_INPUTS], f, status); \
+            s += f[k % N_INPUTS];                                       \
+        }                                                               \
+        sink = s;                                                       \
+    }
+#define NU_PAIR(name, fn, method) NU_INLINE_RUN(name, fn) NUSSELT_RUN(name, method) NUSSELT_ARRAY_RUN(name, method)
+#define F_PAIR(name, fn, method) F_INLINE_RUN(name, fn) FRICTION_RUN(name, method) FRICTION_ARRAY_RUN(name, method)
 
-INLINE_RUN(dittus_boelter, db_inline, in_re, in_pr)
-NUSSELT_RUN(dittus_boelter, TH_NU_DITTUS_BOELTER)
-INLINE_RUN(sieder_tate, st_inline, in_re, in_pr)
-NUSSELT_RUN(sieder_tate, TH_NU_SIEDER_TATE)
-INLINE_RUN(petukhov, petukhov_inline, in_re, in_pr)
-NUSSELT_RUN(petukhov, TH_NU_PETUKHOV)
-INLINE_RUN(gnielinski, gnielinski_inline, in_re, in_pr)
-NUSSELT_RUN(gnielinski, TH_NU_GNIELINSKI)
-INLINE_RUN(haaland, haaland_inline, in_re, in_rr)
-FRICTION_RUN(haaland, TH_F_HAALAND)
-INLINE_RUN(swamee_jain, swamee_jain_inline, in_re, in_rr)
-FRICTION_RUN(swamee_jain, TH_F_SWAMEE_JAIN)
+NU_PAIR(dittus_boelter, db_inline, TH_NU_DITTUS_BOELTER)
+NU_PAIR(sieder_tate, st_inline, TH_NU_SIEDER_TATE)
+NU_PAIR(petukhov, petukhov_inline, TH_NU_PETUKHOV)
+NU_PAIR(gnielinski, gnielinski_inline, TH_NU_GNIELINSKI)
+F_PAIR(haaland, haaland_inline, TH_F_HAALAND)
+F_PAIR(swamee_jain, swamee_jain_inline, TH_F_SWAMEE_JAIN)
+F_PAIR(churchill, churchill_inline, TH_F_CHURCHILL)
 
+#define RUN3(name) run_##name##_inline(); run_##name##_api(); run_##name##_array();
 int main(void) {
     make_inputs();
-    run_dittus_boelter_inline();
-    run_dittus_boelter_api();
-    run_sieder_tate_inline();
-    run_sieder_tate_api();
-    run_petukhov_inline();
-    run_petukhov_api();
-    run_gnielinski_inline();
-    run_gnielinski_api();
-    run_haaland_inline();
-    run_haaland_api();
-    run_swamee_jain_inline();
-    run_swamee_jain_api();
-    printf("%d calls per run\n", N_CALLS);
+    RUN3(dittus_boelter)
+    RUN3(sieder_tate)
+    RUN3(petukhov)
+    RUN3(gnielinski)
+    RUN3(haaland)
+    RUN3(swamee_jain)
+    RUN3(churchill)
+    printf("%d calls (rows) per run\n", N_CALLS);
     return 0;
 }

@@ -5,7 +5,8 @@
  *   - returns a status code (th_status, below) and writes its results
  *     through pointer arguments; nothing is returned any other way;
  *   - writes its outputs when the status is TH_OK or TH_WARN_RANGE, and
- *     leaves them untouched on any error;
+ *     leaves them untouched on any error (the two *_array functions, which
+ *     give every row its own status, say how they differ);
  *   - never writes NaN or infinity together with TH_OK or TH_WARN_RANGE;
  *   - takes and returns SI units (m, kg, s, K, Pa, W, J) as stated beside
  *     each argument; temperatures are absolute (kelvin);
@@ -30,6 +31,8 @@
  */
 #ifndef TUBEHEAT_H
 #define TUBEHEAT_H
+
+#include <stddef.h>
 
 #ifdef __cplusplus
 extern "C" {
@@ -251,6 +254,22 @@ TH_API int th_friction_method_from_name(const char *name, int *method);
 /* Display name of a method; NULL for an unknown id. */
 TH_API const char *th_friction_method_name(int method);
 
+/* Friction factors for n Reynolds numbers re[i] in one pipe (one
+ * rel_roughness): f[i] and status[i] exactly as th_friction_factor(method,
+ * re[i], rel_roughness, ...) gives them, for a fraction of the per-call
+ * cost (the method and the roughness are checked once). For bulk work:
+ * tables, marching along a tube, spreadsheet ranges.
+ *   - A bad call (unknown method: TH_ERR_METHOD; NULL array with n > 0:
+ *     TH_ERR_INPUT) writes nothing.
+ *   - Otherwise every row is written: a failed row gets its error code in
+ *     status[i] and f[i] = NaN, so that it cannot pass for a number. The
+ *     return value is the code of the first failed row, else TH_WARN_RANGE
+ *     when any row warned, else TH_OK.
+ *   - f may be the same array as re (computed in place). */
+TH_API int th_friction_factor_array(int method, size_t n, const double *re,
+                                    double rel_roughness, double *f,
+                                    int *status);
+
 /* ------------------------------------------------------------------------
  * Nusselt number by chosen method     (laminar.cpp, turbulent.cpp,
  *                                      nusselt.cpp)
@@ -321,7 +340,25 @@ typedef enum th_duct_shape {
 
 /* Everything a Nusselt method may need. Initialise with
  * th_conditions_init() and set what applies; each method reads only the
- * fields it uses and ignores the rest. */
+ * fields it uses, checks only those, and ignores the rest (an unused field
+ * may hold anything). Every method reads re, pr and l_over_d; beyond them:
+ *
+ *   TH_NU_AUTO                    averaging, wall, entry, duct, and then
+ *                                 what the chosen method reads
+ *   TH_NU_LAMINAR_DEVELOPED       wall, duct, duct_ratio
+ *   TH_NU_DITTUS_BOELTER          direction
+ *   TH_NU_SIEDER_TATE             mu_ratio
+ *   TH_NU_PETUKHOV                rel_roughness
+ *   TH_NU_GNIELINSKI              averaging, rel_roughness, correction
+ *                                 (with pr_wall or t_ratio), length_factor
+ *   TH_NU_GNIELINSKI_TRANSITION   as TH_NU_GNIELINSKI, and wall, entry
+ *   TH_NU_SIEDER_TATE_LAMINAR     averaging, wall, entry, duct, mu_ratio
+ *   TH_NU_HAUSEN, TH_NU_SHAH, TH_NU_GNIELINSKI_LAMINAR, TH_NU_GRAETZ_EXACT,
+ *   TH_NU_COMBINED_ENTRY_NUMERIC  averaging, wall, entry, duct
+ *   TH_NU_LIQUID_METAL            wall
+ *
+ * (duct_ratio only for the shapes that use it; the circular-tube laminar
+ * methods read duct only to warn when it is not a circle.) */
 typedef struct th_conditions {
     double re;            /* Reynolds number, > 0                          */
     double pr;            /* bulk Prandtl number, > 0                      */
@@ -370,6 +407,26 @@ TH_API int th_nusselt(int method, const th_conditions *c,
 TH_API int th_nusselt_method_from_name(const char *name, int *method);
 /* Display name; NULL for an unknown id. */
 TH_API const char *th_nusselt_method_name(int method);
+
+/* Nusselt numbers for n rows that share every condition in *shared except
+ * re[i], pr[i] and, when l_over_d is not NULL, l_over_d[i] (otherwise
+ * shared->l_over_d for every row; shared->re and ->pr are not read).
+ * nu[i] and status[i] are exactly what th_nusselt(method, &row_i, ...)
+ * gives, for a fraction of its per-call cost: the shared fields are
+ * checked once and the method is dispatched once (TH_NU_AUTO still
+ * chooses row by row, at th_nusselt's cost). The name, reason, range note
+ * and friction factor of each row are not returned: call th_nusselt for a
+ * row whose status[i] is TH_WARN_RANGE to read its note.
+ *   - A bad call (unknown method: TH_ERR_METHOD; NULL shared or array with
+ *     n > 0: TH_ERR_INPUT) writes nothing.
+ *   - Otherwise every row is written: a failed row gets its error code in
+ *     status[i] and nu[i] = NaN, so that it cannot pass for a number. The
+ *     return value is the code of the first failed row, else TH_WARN_RANGE
+ *     when any row warned, else TH_OK.
+ *   - nu may be the same array as re, pr or l_over_d (computed in place). */
+TH_API int th_nusselt_array(int method, const th_conditions *shared, size_t n,
+                            const double *re, const double *pr,
+                            const double *l_over_d, double *nu, int *status);
 
 /* ------------------------------------------------------------------------
  * Tube energy balance                          (lib/src/energy.cpp)

@@ -17,16 +17,9 @@ double nu_gnielinski_laminar(const th_conditions &c, range_check &rc);
 // The composite evaluated at a given Re (used by the transition method).
 double nu_gnielinski_laminar_at(const th_conditions &c, double re, range_check &rc);
 
-// Turbulent and transitional (turbulent.cpp). `f` receives the Darcy
-// friction factor used, where the method uses one.
-double nu_dittus_boelter(const th_conditions &c, range_check &rc);
-double nu_sieder_tate(const th_conditions &c, range_check &rc);
-double nu_petukhov(const th_conditions &c, range_check &rc, double &f);
-double nu_gnielinski(const th_conditions &c, range_check &rc, double &f);
-double nu_gnielinski_at(const th_conditions &c, double re, range_check &rc, double &f);
-double nu_gnielinski_transition(const th_conditions &c, range_check &rc, double &f);
-double nu_liquid_metal(const th_conditions &c, range_check &rc);
-
 }  // namespace th
+
+// Turbulent and transitional: inline, in turbulent.hpp.
+#include "turbulent.hpp"
 
 #endif

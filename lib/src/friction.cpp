@@ -2,12 +2,14 @@
 #include "friction_internal.hpp"
 #include "internal.hpp"
 #include "method_names.hpp"
+#include "rows.hpp"
 
 #include <boost/math/constants/constants.hpp>
 #include <boost/math/special_functions/lambert_w.hpp>
 
 #include <algorithm>
 #include <cmath>
+#include <type_traits>
 
 using th::checked;
 using th::fail;
@@ -48,28 +50,68 @@ double colebrook(double re, double rr) {
     return 1.0 / (inv_sqrt_f * inv_sqrt_f);
 }
 
-double petukhov_f(double re) {
-    const double t = 0.790 * std::log(re) - 1.64;
-    return 1.0 / (t * t);
+namespace {
+
+// Churchill (1977), all regimes:
+//   f = 8 [(8/Re)^12 + (A + B)^-1.5]^(1/12),
+//   A = [2.457 ln(1/((7/Re)^0.9 + 0.27 eps/D))]^16,  B = (37530/Re)^16.
+// The integer powers are taken by repeated squaring and (A+B)^-1.5 as
+// 1/(s sqrt s): two pow calls and one log in all, which is what makes
+// Churchill as fast as the other closed forms. Evaluated so for
+// Re >= 1e-8, where no intermediate can overflow: B <= 1.6e202, (8/Re)^12
+// <= 7e106, s^1.5 <= 2e303, and A is at most 1e51 for any Re, eps/D. A is
+// an even power, so the sign of the logarithm (negative below Re ~ 7) does
+// not matter.
+double churchill(double re, double rr) {
+    if (re >= 1e-8) {
+        // One division, off the critical path; ln(1/x) taken as -ln(x).
+        const double inv_re = 1.0 / re;
+        const double t = -2.457 * std::log(std::pow(7.0 * inv_re, 0.9) + 0.27 * rr);
+        const double t2 = t * t, t4 = t2 * t2, t8 = t4 * t4;
+        const double q = 37530.0 * inv_re;
+        const double q2 = q * q, q4 = q2 * q2, q8 = q4 * q4;
+        const double s = t8 * t8 + q8 * q8;
+        const double r = 8.0 * inv_re;
+        const double r2 = r * r, r4 = r2 * r2;
+        const double r12 = r4 * r4 * r4;
+        return 8.0 * std::pow(r12 + 1.0 / (s * std::sqrt(s)), 1.0 / 12.0);
+    }
+    // Creeping flow down to the smallest Re: B and (8/Re)^12 overflow, so
+    // the powers are regrouped in logarithms (log-sum-exp for A + B).
+    const double ln_a = 16.0 * std::log(std::fabs(
+        2.457 * std::log(1.0 / (std::pow(7.0 / re, 0.9) + 0.27 * rr))));
+    const double ln_b = 16.0 * std::log(37530.0 / re);
+    const double m = std::max(ln_a, ln_b);
+    const double ln_sum = m + std::log(std::exp(ln_a - m) + std::exp(ln_b - m));
+    const double term2 = std::exp(-1.5 * ln_sum);
+    return 8.0 * std::pow(std::pow(8.0 / re, 12.0) + term2, 1.0 / 12.0);
 }
 
-double friction(int method, double re, double rr, range_check &rc) {
-    switch (method) {
-    case TH_F_AUTO:
-        if (re < TH_RE_LAMINAR_MAX) return friction(TH_F_LAMINAR, re, rr, rc);
+}  // namespace
+
+// Friction factor by method M; Range is range_check (the first violated
+// limit kept, for a single call) or range_flag (only whether one was, for
+// the array form).
+template <int M, class Range>
+double friction_of(double re, double rr, Range &rc) {
+    if constexpr (M == TH_F_AUTO) {
+        if (re < TH_RE_LAMINAR_MAX) return 64.0 / re;  // as TH_F_LAMINAR
         rc.require(re >= 4000.0, "transitional flow (2300 <= Re < 4000): "
                                  "friction factor uncertain, Colebrook used");
         rc.require(rr <= 0.05, "relative roughness above 0.05 (Colebrook range)");
         return colebrook(re, rr);
-    case TH_F_LAMINAR:  // Hagen-Poiseuille, analytic
+    }
+    if constexpr (M == TH_F_LAMINAR) {  // Hagen-Poiseuille, analytic
         rc.require(re < TH_RE_LAMINAR_MAX, "laminar 64/Re applied at Re >= 2300");
         return 64.0 / re;
-    case TH_F_COLEBROOK:
+    }
+    if constexpr (M == TH_F_COLEBROOK) {
         rc.require(re >= 4000.0, "Re below 4000 (Colebrook range 4e3..1e8)");
         rc.require(re <= 1e8, "Re above 1e8 (Colebrook range 4e3..1e8)");
         rc.require(rr <= 0.05, "relative roughness above 0.05 (Colebrook range)");
         return colebrook(re, rr);
-    case TH_F_HAALAND: {
+    }
+    if constexpr (M == TH_F_HAALAND) {
         rc.require(re >= 4000.0, "Re below 4000 (Haaland range 4e3..1e8)");
         rc.require(re <= 1e8, "Re above 1e8 (Haaland range 4e3..1e8)");
         rc.require(rr == 0.0 || (rr >= 1e-6 && rr <= 0.05),
@@ -77,7 +119,7 @@ double friction(int method, double re, double rr, range_check &rc) {
         const double t = -1.8 * std::log10(std::pow(rr / 3.7, 1.11) + 6.9 / re);
         return 1.0 / (t * t);
     }
-    case TH_F_SWAMEE_JAIN: {
+    if constexpr (M == TH_F_SWAMEE_JAIN) {
         rc.require(re >= 5000.0, "Re below 5000 (Swamee-Jain range 5e3..1e8)");
         rc.require(re <= 1e8, "Re above 1e8 (Swamee-Jain range 5e3..1e8)");
         rc.require(rr == 0.0 || (rr >= 1e-6 && rr <= 0.01),
@@ -85,28 +127,53 @@ double friction(int method, double re, double rr, range_check &rc) {
         const double t = std::log10(rr / 3.7 + 5.74 / std::pow(re, 0.9));
         return 0.25 / (t * t);
     }
-    case TH_F_CHURCHILL: {
+    if constexpr (M == TH_F_CHURCHILL) {
         rc.require(rr <= 0.05, "relative roughness above 0.05 (Churchill range)");
-        // Evaluated with the powers regrouped so that (A+B)^-1.5 cannot
-        // overflow: A and B are 16th powers of quantities near 1e1..1e4.
-        // A is an even power, so the sign of the logarithm (negative below
-        // Re ~ 7) does not matter: take its magnitude.
-        const double ln_a = 16.0 * std::log(std::fabs(
-            2.457 * std::log(1.0 / (std::pow(7.0 / re, 0.9) + 0.27 * rr))));
-        const double ln_b = 16.0 * std::log(37530.0 / re);
-        const double m = std::max(ln_a, ln_b);
-        const double ln_sum = m + std::log(std::exp(ln_a - m) + std::exp(ln_b - m));
-        const double term2 = std::exp(-1.5 * ln_sum);
-        return 8.0 * std::pow(std::pow(8.0 / re, 12.0) + term2, 1.0 / 12.0);
+        return churchill(re, rr);
     }
-    case TH_F_PETUKHOV:
+    if constexpr (M == TH_F_PETUKHOV) {
         rc.require(re >= 3000.0, "Re below 3000 (Petukhov friction range 3e3..5e6)");
         rc.require(re <= 5e6, "Re above 5e6 (Petukhov friction range 3e3..5e6)");
         rc.require(rr == 0.0, "Petukhov friction is for smooth tubes; roughness ignored");
         return petukhov_f(re);
-    default:
-        fail(TH_ERR_METHOD);
     }
+}
+
+template <class Visit>
+decltype(auto) with_friction_method(int method, Visit &&visit) {
+    return with_id<0, TH_F_METHOD_COUNT>(method, std::forward<Visit>(visit));
+}
+
+// The friction factor, and TH_ERR_INPUT unless it is finite and positive
+// (1/t^2 underflows to 0 when 6.9/Re overflows at a subnormal Re).
+template <int M, class Range>
+double friction_checked_of(double re, double rr, Range &rc) {
+    return positive_result(friction_of<M>(re, rr, rc));
+}
+
+// Method M for every row of th_friction_factor_array: the row inputs in a
+// branch-free first pass, then only the rows that passed are computed.
+template <int M>
+int friction_rows(std::size_t n, const double *re, double rr, int shared_status, double *f, int *status) {
+    for (std::size_t i = 0; i < n; ++i) status[i] = positive_finite(re[i]) ? shared_status : TH_ERR_INPUT;
+    return for_each_row(n, f, status, [&](std::size_t i, double &value) {
+        if (status[i] != TH_OK) return status[i];
+        const double re_i = re[i];
+        return guard([&] {
+            range_flag rc;
+            value = friction_checked_of<M>(re_i, rr, rc);
+            return rc.status();
+        });
+    });
+}
+
+double friction(int method, double re, double rr, range_check &rc) {
+    return with_friction_method(method, [&](auto m) { return friction_of<decltype(m)::value>(re, rr, rc); });
+}
+
+double friction_checked(int method, double re, double rr, range_check &rc) {
+    return with_friction_method(method,
+                                [&](auto m) { return friction_checked_of<decltype(m)::value>(re, rr, rc); });
 }
 
 }  // namespace th
@@ -137,11 +204,30 @@ int th_friction_factor(int method, double re, double rel_roughness, double *f) {
         need_positive(re);
         need_nonnegative(rel_roughness);
         need(rel_roughness < 1.0);
-        th::range_check rc;
-        const double ff = checked(th::friction(method, re, rel_roughness, rc));
-        need(ff > 0.0);  // 1/t^2 underflows to 0 when 6.9/Re overflows (subnormal Re)
-        *f = ff;
-        return rc.status();
+        return th::with_friction_method(method, [&](auto m) {
+            th::range_check rc;
+            *f = th::friction_checked_of<decltype(m)::value>(re, rel_roughness, rc);
+            return rc.status();
+        });
+    });
+}
+
+int th_friction_factor_array(int method, std::size_t n, const double *re, double rel_roughness,
+                             double *f, int *status) {
+    return guard([&] {
+        if (method < 0 || method >= TH_F_METHOD_COUNT) fail(TH_ERR_METHOD);
+        if (n == 0) return int{TH_OK};
+        need(re != nullptr && f != nullptr && status != nullptr);
+        // The roughness once; when it is bad every row fails, as
+        // th_friction_factor fails each of them.
+        const int shared_status = guard([&] {
+            need_nonnegative(rel_roughness);
+            need(rel_roughness < 1.0);
+            return TH_OK;
+        });
+        return th::with_friction_method(method, [&](auto m) {
+            return th::friction_rows<decltype(m)::value>(n, re, rel_roughness, shared_status, f, status);
+        });
     });
 }
 
@@ -177,8 +263,7 @@ int th_pressure_drop_mass_flow(int method, double mdot, double d, double length,
         const double u = mdot / (rho * area);
         const double re = rho * u * d / mu;
         th::range_check rc;
-        const double ff = checked(th::friction(method, re, rel_roughness, rc));
-        need(ff > 0.0);  // see th_friction_factor
+        const double ff = th::friction_checked(method, re, rel_roughness, rc);
         const double p = checked(ff * (length / d) * rho * u * u / 2.0);
         if (f) *f = ff;
         *dp = p;

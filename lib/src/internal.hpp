@@ -9,8 +9,11 @@
 
 #include <cmath>
 #include <exception>
+#include <limits>
 #include <new>
 #include <stdexcept>
+#include <type_traits>
+#include <utility>
 
 namespace th {
 
@@ -62,11 +65,22 @@ inline void need_finite(double x) { need(finite(x)); }
 inline void need_positive_or_inf(double x) { need(!std::isnan(x) && x > 0.0); }
 inline void need_temperature(double t) { need(finite(t) && t > 0.0); }
 
+// The same tests as expressions, for loops over many rows: no branch is
+// needed, so the compiler can vectorise them.
+inline bool positive_finite(double x) { return x > 0.0 && x <= std::numeric_limits<double>::max(); }
+inline bool positive_or_inf(double x) { return x > 0.0; }  // false for NaN
+
 // A result about to be written with a success code must be finite. Inputs
 // that are each finite can still be so extreme that the result overflows
 // (1e308 * 1e308): that is bad input, reported as such, never written.
 inline double checked(double x) {
     if (!std::isfinite(x)) fail(TH_ERR_INPUT);
+    return x;
+}
+// Finite and positive (a Nusselt number, a friction factor): checked() and
+// need(x > 0) in one test.
+inline double positive_result(double x) {
+    if (!positive_finite(x)) fail(TH_ERR_INPUT);
     return x;
 }
 
@@ -85,6 +99,34 @@ class range_check {
   private:
     const char *note_ = nullptr;
 };
+
+// The same interface for the *_array functions, which report per row only
+// whether some limit was violated, not which: a flag, cheaper than keeping
+// the first note (see rows.hpp).
+class range_flag {
+  public:
+    void require(bool within, const char * /*note*/) { ok_ = ok_ && within; }
+    bool ok() const { return ok_; }
+    int status() const { return ok_ ? TH_OK : TH_WARN_RANGE; }
+
+  private:
+    bool ok_ = true;
+};
+
+// Calls visit(std::integral_constant<int, I>{}) for the I in [First, Last)
+// equal to the run-time id, and fails with TH_ERR_METHOD for any other id.
+// Each method then compiles to its own straight-line code (its checks and
+// formula known at compile time) while callers pass a method id.
+template <int First, int Last, class Visit>
+decltype(auto) with_id(int id, Visit &&visit) {
+    if constexpr (First + 1 == Last) {
+        if (id != First) fail(TH_ERR_METHOD);
+        return visit(std::integral_constant<int, First>{});
+    } else {
+        if (id == First) return visit(std::integral_constant<int, First>{});
+        return with_id<First + 1, Last>(id, std::forward<Visit>(visit));
+    }
+}
 
 // Case-insensitive comparison that treats '-', '_', ' ' and '.' as equal
 // and ignores them, so "Dittus-Boelter", "dittus_boelter" and

@@ -101,17 +101,17 @@ double nu_gnielinski_laminar_at(const th_conditions &c, double re, range_check &
     rc.require(c.pr >= 0.1 && c.pr <= 1000.0, "Pr outside Gnielinski laminar range 0.1..1000");
     const double z = std::isinf(c.l_over_d) ? 0.0 : re * c.pr / c.l_over_d;
     const bool combined = c.entry == TH_ENTRY_COMBINED;
+    // Cubes by multiplication: pow(x, 3) costs a general pow call.
+    const auto cube = [](double x) { return x * x * x; };
     double sum;
     if (c.wall == TH_WALL_T) {
-        const double t2 = 1.615 * std::cbrt(z) - 0.7;
-        sum = std::pow(3.66, 3) + std::pow(0.7, 3) + t2 * t2 * t2;
-        if (combined) sum += std::pow(std::pow(2.0 / (1.0 + 22.0 * c.pr), 1.0 / 6.0) * std::sqrt(z), 3);
+        sum = cube(3.66) + cube(0.7) + cube(1.615 * std::cbrt(z) - 0.7);
+        if (combined) sum += cube(std::pow(2.0 / (1.0 + 22.0 * c.pr), 1.0 / 6.0) * std::sqrt(z));
     } else {
-        const double t2 = 1.953 * std::cbrt(z) - 0.6;
-        sum = std::pow(4.354, 3) + std::pow(0.6, 3) + t2 * t2 * t2;
+        sum = cube(4.354) + cube(0.6) + cube(1.953 * std::cbrt(z) - 0.6);
         if (combined) {
             const double red = std::isinf(c.l_over_d) ? 0.0 : re / c.l_over_d;
-            sum += std::pow(0.924 * std::cbrt(c.pr) * std::sqrt(red), 3);
+            sum += cube(0.924 * std::cbrt(c.pr) * std::sqrt(red));
         }
     }
     return std::cbrt(sum);

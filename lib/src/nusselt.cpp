@@ -2,10 +2,12 @@
 // the method chosen by the caller, the automatic choice, and method names.
 #include "correlations.hpp"
 #include "method_names.hpp"
+#include "rows.hpp"
 #include "entry_internal.hpp"
 
 #include <cmath>
 #include <limits>
+#include <type_traits>
 
 namespace th {
 namespace {
@@ -41,39 +43,99 @@ constexpr method_name nusselt_names[] = {
 // Every th_nusselt() call names its method, so display names are indexed.
 constexpr auto display_name = index_names<TH_NU_METHOD_COUNT>(nusselt_names);
 
-void validate(const th_conditions &c) {
+// Which th_conditions fields each method reads, beyond re, pr and
+// l_over_d (read by every method, for the L/D warning at least). Only these
+// are validated: the header promises that a method ignores the rest, so a
+// blank mu_ratio cannot fail a Dittus-Boelter call, and a call pays only for
+// the checks it needs (docs/performance.md).
+enum field_read : unsigned {
+    reads_averaging = 1u << 0,
+    reads_wall = 1u << 1,
+    reads_direction = 1u << 2,
+    reads_entry = 1u << 3,
+    reads_mu_ratio = 1u << 4,
+    reads_roughness = 1u << 5,
+    reads_correction = 1u << 6,     // and pr_wall or t_ratio, as it selects
+    reads_length_factor = 1u << 7,
+    reads_duct = 1u << 8,           // the shape only: circle or not
+    reads_duct_ratio = 1u << 9,     // duct_ratio too, for shapes that use it
+};
+
+// The laminar methods fitted to circular tubes warn in a non-circular duct,
+// so they read the shape.
+constexpr unsigned circle_laminar = reads_averaging | reads_wall | reads_entry | reads_duct;
+
+constexpr unsigned fields_read(int method) {
+    switch (method) {
+    case TH_NU_AUTO:  // what the choice itself reads
+        return reads_averaging | reads_wall | reads_entry | reads_duct;
+    case TH_NU_LAMINAR_DEVELOPED:
+        return reads_wall | reads_duct | reads_duct_ratio;
+    case TH_NU_DITTUS_BOELTER:
+        return reads_direction;
+    case TH_NU_SIEDER_TATE:
+        return reads_mu_ratio;
+    case TH_NU_PETUKHOV:
+        return reads_roughness;
+    case TH_NU_GNIELINSKI:
+        return reads_averaging | reads_roughness | reads_correction | reads_length_factor;
+    case TH_NU_GNIELINSKI_TRANSITION:  // its laminar end reads wall and entry
+        return reads_averaging | reads_wall | reads_entry | reads_roughness | reads_correction |
+               reads_length_factor;
+    case TH_NU_SIEDER_TATE_LAMINAR:
+        return circle_laminar | reads_mu_ratio;
+    case TH_NU_HAUSEN:
+    case TH_NU_SHAH:
+    case TH_NU_GNIELINSKI_LAMINAR:
+    case TH_NU_GRAETZ_EXACT:
+    case TH_NU_COMBINED_ENTRY_NUMERIC:
+        return circle_laminar;
+    case TH_NU_LIQUID_METAL:
+        return reads_wall;
+    default:
+        return ~0u;
+    }
+}
+
+// re, pr and l_over_d: read by every method.
+void validate_common(const th_conditions &c) {
     need_positive(c.re);
     need_positive(c.pr);
     need_positive_or_inf(c.l_over_d);
-    need(c.averaging == TH_MEAN || c.averaging == TH_LOCAL);
-    need(c.wall == TH_WALL_T || c.wall == TH_WALL_H);
-    need(c.direction == TH_HEATING || c.direction == TH_COOLING);
-    need(c.entry == TH_ENTRY_THERMAL || c.entry == TH_ENTRY_COMBINED);
-    need_positive(c.mu_ratio);
-    need(std::isfinite(c.rel_roughness) && c.rel_roughness >= 0.0 && c.rel_roughness < 1.0);
-    need(c.correction == TH_CORR_NONE || c.correction == TH_CORR_LIQUID ||
-         c.correction == TH_CORR_GAS);
-    if (c.correction == TH_CORR_LIQUID) need_positive(c.pr_wall);
-    if (c.correction == TH_CORR_GAS) need_positive(c.t_ratio);
-    need(c.length_factor == 0 || c.length_factor == 1);
-    need(c.duct >= TH_DUCT_CIRCLE && c.duct <= TH_DUCT_ANNULUS);
-    if (c.duct == TH_DUCT_RECTANGLE || c.duct == TH_DUCT_ANNULUS)
-        need(std::isfinite(c.duct_ratio) && c.duct_ratio > 0.0 && c.duct_ratio <= 1.0);
-    if (c.duct == TH_DUCT_ANNULUS) need(c.duct_ratio < 1.0);
+}
+
+// The fields in `Read`, known at compile time so that each method's checks
+// are straight-line code.
+template <unsigned Read>
+void validate(const th_conditions &c) {
+    if constexpr ((Read & reads_averaging) != 0) need(c.averaging == TH_MEAN || c.averaging == TH_LOCAL);
+    if constexpr ((Read & reads_wall) != 0) need(c.wall == TH_WALL_T || c.wall == TH_WALL_H);
+    if constexpr ((Read & reads_direction) != 0) need(c.direction == TH_HEATING || c.direction == TH_COOLING);
+    if constexpr ((Read & reads_entry) != 0)
+        need(c.entry == TH_ENTRY_THERMAL || c.entry == TH_ENTRY_COMBINED);
+    if constexpr ((Read & reads_mu_ratio) != 0) need_positive(c.mu_ratio);
+    if constexpr ((Read & reads_roughness) != 0)
+        need(std::isfinite(c.rel_roughness) && c.rel_roughness >= 0.0 && c.rel_roughness < 1.0);
+    if constexpr ((Read & reads_correction) != 0) {
+        need(c.correction == TH_CORR_NONE || c.correction == TH_CORR_LIQUID ||
+             c.correction == TH_CORR_GAS);
+        if (c.correction == TH_CORR_LIQUID) need_positive(c.pr_wall);
+        if (c.correction == TH_CORR_GAS) need_positive(c.t_ratio);
+    }
+    if constexpr ((Read & reads_length_factor) != 0) need(c.length_factor == 0 || c.length_factor == 1);
+    if constexpr ((Read & reads_duct) != 0) need(c.duct >= TH_DUCT_CIRCLE && c.duct <= TH_DUCT_ANNULUS);
+    if constexpr ((Read & reads_duct_ratio) != 0) {
+        if (c.duct == TH_DUCT_RECTANGLE || c.duct == TH_DUCT_ANNULUS)
+            need(std::isfinite(c.duct_ratio) && c.duct_ratio > 0.0 && c.duct_ratio <= 1.0);
+        if (c.duct == TH_DUCT_ANNULUS) need(c.duct_ratio < 1.0);
+    }
 }
 
 struct evaluation {
-    double nu = 0.0;
     double f = 0.0;
     int method = TH_NU_AUTO;
     const char *reason = "chosen by caller";
 };
-
-bool is_laminar_method(int m) {
-    return m == TH_NU_LAMINAR_DEVELOPED || m == TH_NU_HAUSEN || m == TH_NU_SIEDER_TATE_LAMINAR ||
-           m == TH_NU_SHAH || m == TH_NU_GNIELINSKI_LAMINAR || m == TH_NU_GRAETZ_EXACT ||
-           m == TH_NU_COMBINED_ENTRY_NUMERIC;
-}
 
 double laminar_developed(const th_conditions &c, range_check &rc) {
     if (c.duct == TH_DUCT_CIRCLE) return nu_laminar_developed(c, rc);
@@ -85,48 +147,80 @@ double laminar_developed(const th_conditions &c, range_check &rc) {
     return c.wall == TH_WALL_T ? nu_t : nu_h;
 }
 
+double graetz_exact(const th_conditions &c, range_check &rc) {
+    rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
+    rc.require(c.entry == TH_ENTRY_THERMAL || c.pr > 1e4,
+               "exact series is for thermal entry (velocity developed); combined entry requested");
+    const double xs = std::isinf(c.l_over_d) ? c.l_over_d : c.l_over_d / (c.re * c.pr);
+    return thermal_entry_nu(xs, c.wall, c.averaging);
+}
+
+double combined_entry(const th_conditions &c, range_check &rc) {
+    rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
+    rc.require(c.entry == TH_ENTRY_COMBINED, "combined-entry solution requested for a thermal-entry case");
+    const double xs = std::isinf(c.l_over_d) ? c.l_over_d : c.l_over_d / (c.re * c.pr);
+    rc.require(c.pr >= 0.5 && c.pr <= 1e4, "Pr outside the validated range 0.5..1e4 of the combined-entry solution");
+    return combined_entry_nu(xs, c.pr, c.wall, c.averaging);
+}
+
+// The laminar correlations (laminar.cpp, laminar_entry_*.cpp) keep the
+// first violated limit in a range_check; this passes that on to a
+// range_flag when the array form asks only whether one was violated.
+template <class Range, class Method>
+double with_full_check(Range &rc, Method &&method) {
+    if constexpr (std::is_same_v<Range, range_check>) {
+        return method(rc);
+    } else {
+        range_check full;
+        const double v = method(full);
+        rc.require(full.ok(), full.note());
+        return v;
+    }
+}
+
+// Nu by method `M` from conditions already validated for it (validate<>
+// of fields_read(M), and validate_common). Records the two warnings every
+// method shares first, in this order: a circular-tube laminar fit used in a
+// duct, then a length below one diameter. Range: range_check or range_flag.
+template <int M, class Range>
+double compute(const th_conditions &c, Range &rc, double &f) {
+    if constexpr (M != TH_NU_LAMINAR_DEVELOPED && (fields_read(M) & reads_duct) != 0)
+        rc.require(c.duct == TH_DUCT_CIRCLE, "circular-tube laminar correlation applied to a non-circular duct");
+    // No correlation or solution was fitted to, or validated on, a tube
+    // shorter than its diameter; the entry terms then grow without bound
+    // (Nu ~ (D/L)^(1/3) and faster).
+    rc.require(c.l_over_d >= 1.0, "L/D (or x/D) below 1: shorter than one diameter, beyond every method's data");
+    if constexpr (M == TH_NU_DITTUS_BOELTER) return nu_dittus_boelter(c, rc);
+    if constexpr (M == TH_NU_SIEDER_TATE) return nu_sieder_tate(c, rc);
+    if constexpr (M == TH_NU_PETUKHOV) return nu_petukhov(c, rc, f);
+    if constexpr (M == TH_NU_GNIELINSKI) return nu_gnielinski(c, rc, f);
+    if constexpr (M == TH_NU_GNIELINSKI_TRANSITION) return nu_gnielinski_transition(c, rc, f);
+    if constexpr (M == TH_NU_LIQUID_METAL) return nu_liquid_metal(c, rc);
+    return with_full_check(rc, [&](range_check &full) {
+        if constexpr (M == TH_NU_LAMINAR_DEVELOPED) return laminar_developed(c, full);
+        if constexpr (M == TH_NU_HAUSEN) return nu_hausen(c, full);
+        if constexpr (M == TH_NU_SIEDER_TATE_LAMINAR) return nu_sieder_tate_laminar(c, full);
+        if constexpr (M == TH_NU_SHAH) return nu_shah(c, full);
+        if constexpr (M == TH_NU_GNIELINSKI_LAMINAR) return nu_gnielinski_laminar(c, full);
+        if constexpr (M == TH_NU_GRAETZ_EXACT) return graetz_exact(c, full);
+        if constexpr (M == TH_NU_COMBINED_ENTRY_NUMERIC) return combined_entry(c, full);
+        return 0.0;  // the turbulent methods returned above
+    });
+}
+
+// Dispatch on a method id other than TH_NU_AUTO (which the caller resolves
+// first; TH_ERR_METHOD here).
+template <class Visit>
+decltype(auto) with_method(int method, Visit &&visit) {
+    return with_id<TH_NU_AUTO + 1, TH_NU_METHOD_COUNT>(method, std::forward<Visit>(visit));
+}
+
+// Validate what the method reads, then compute.
 double evaluate(int method, const th_conditions &c, range_check &rc, double &f) {
-    switch (method) {
-    case TH_NU_LAMINAR_DEVELOPED:
-        return laminar_developed(c, rc);
-    case TH_NU_DITTUS_BOELTER:
-        return nu_dittus_boelter(c, rc);
-    case TH_NU_SIEDER_TATE:
-        return nu_sieder_tate(c, rc);
-    case TH_NU_PETUKHOV:
-        return nu_petukhov(c, rc, f);
-    case TH_NU_GNIELINSKI:
-        return nu_gnielinski(c, rc, f);
-    case TH_NU_GNIELINSKI_TRANSITION:
-        return nu_gnielinski_transition(c, rc, f);
-    case TH_NU_HAUSEN:
-        return nu_hausen(c, rc);
-    case TH_NU_SIEDER_TATE_LAMINAR:
-        return nu_sieder_tate_laminar(c, rc);
-    case TH_NU_SHAH:
-        return nu_shah(c, rc);
-    case TH_NU_GNIELINSKI_LAMINAR:
-        return nu_gnielinski_laminar(c, rc);
-    case TH_NU_LIQUID_METAL:
-        return nu_liquid_metal(c, rc);
-    case TH_NU_GRAETZ_EXACT: {
-        rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
-        rc.require(c.entry == TH_ENTRY_THERMAL || c.pr > 1e4,
-                   "exact series is for thermal entry (velocity developed); combined entry requested");
-        const double xs = std::isinf(c.l_over_d) ? c.l_over_d : c.l_over_d / (c.re * c.pr);
-        return thermal_entry_nu(xs, c.wall, c.averaging);
-    }
-    case TH_NU_COMBINED_ENTRY_NUMERIC: {
-        rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
-        rc.require(c.entry == TH_ENTRY_COMBINED,
-                   "combined-entry solution requested for a thermal-entry case");
-        const double xs = std::isinf(c.l_over_d) ? c.l_over_d : c.l_over_d / (c.re * c.pr);
-        rc.require(c.pr >= 0.5 && c.pr <= 1e4, "Pr outside the validated range 0.5..1e4 of the combined-entry solution");
-        return combined_entry_nu(xs, c.pr, c.wall, c.averaging);
-    }
-    default:
-        fail(TH_ERR_METHOD);
-    }
+    return with_method(method, [&](auto m) {
+        validate<fields_read(m.value)>(c);
+        return compute<m.value>(c, rc, f);
+    });
 }
 
 // The automatic choice: regime first, then Pr (liquid metals, very viscous
@@ -184,6 +278,60 @@ evaluation choose(const th_conditions &c) {
     return e;
 }
 
+// ---- the array form -------------------------------------------------------
+// The per-row columns of th_nusselt_array; l_over_d may be NULL (shared).
+struct row_columns {
+    const double *re, *pr, *l_over_d;
+    void set(std::size_t i, th_conditions &c) const {
+        c.re = re[i];
+        c.pr = pr[i];
+        if (l_over_d != nullptr) c.l_over_d = l_over_d[i];
+    }
+};
+
+// TH_NU_AUTO may choose a different method for each row: th_nusselt's path.
+int nusselt_rows_auto(const th_conditions &shared, std::size_t n, const row_columns &in, double *nu,
+                      int *status) {
+    th_conditions c = shared;
+    return for_each_row(n, nu, status, [&](std::size_t i, double &value) {
+        in.set(i, c);
+        th_nusselt_result r{};
+        const int s = th_nusselt(TH_NU_AUTO, &c, &r);
+        value = r.nu;
+        return s;
+    });
+}
+
+// Method M for every row. What th_nusselt checks on every call is split:
+// the shared fields once, the row inputs in a branch-free first pass, and
+// only the rows that passed are computed.
+template <int M>
+int nusselt_rows(const th_conditions &shared, std::size_t n, const row_columns &in, double *nu,
+                 int *status) {
+    // When a shared field is bad every row fails, as th_nusselt fails each.
+    const int shared_status = guard([&] {
+        validate<fields_read(M)>(shared);
+        if (in.l_over_d == nullptr) need_positive_or_inf(shared.l_over_d);
+        return TH_OK;
+    });
+    for (std::size_t i = 0; i < n; ++i)
+        status[i] = positive_finite(in.re[i]) & positive_finite(in.pr[i]) ? shared_status : TH_ERR_INPUT;
+    if (in.l_over_d != nullptr)
+        for (std::size_t i = 0; i < n; ++i)
+            if (!positive_or_inf(in.l_over_d[i])) status[i] = TH_ERR_INPUT;
+    th_conditions c = shared;
+    return for_each_row(n, nu, status, [&](std::size_t i, double &value) {
+        if (status[i] != TH_OK) return status[i];
+        in.set(i, c);
+        return guard([&] {
+            range_flag rc;
+            double f = 0.0;
+            value = positive_result(compute<M>(c, rc, f));
+            return rc.status();
+        });
+    });
+}
+
 const char *used_name(int method, const th_conditions &c) {
     if (method == TH_NU_LIQUID_METAL)
         return c.wall == TH_WALL_H ? "liquid metal (Skupinski)" : "liquid metal (Seban-Shimazaki)";
@@ -224,31 +372,40 @@ int th_nusselt(int method, const th_conditions *c, th_nusselt_result *out) {
         th::need_out(out);
         th::need(c != nullptr);
         if (method < 0 || method >= TH_NU_METHOD_COUNT) th::fail(TH_ERR_METHOD);
-        th::validate(*c);
+        th::validate_common(*c);
         th::evaluation e;
-        if (method == TH_NU_AUTO)
+        if (method == TH_NU_AUTO) {
+            th::validate<th::fields_read(TH_NU_AUTO)>(*c);
             e = th::choose(*c);
-        else
+        } else {
             e.method = method;
+        }
         th::range_check rc;
-        if (c->duct != TH_DUCT_CIRCLE && th::is_laminar_method(e.method) &&
-            e.method != TH_NU_LAMINAR_DEVELOPED)
-            rc.require(false, "circular-tube laminar correlation applied to a non-circular duct");
-        // No correlation or solution was fitted to, or validated on, a tube
-        // shorter than its diameter; the entry terms then grow without
-        // bound (Nu ~ (D/L)^(1/3) and faster).
-        rc.require(c->l_over_d >= 1.0, "L/D (or x/D) below 1: shorter than one diameter, beyond every method's data");
-        e.nu = th::checked(th::evaluate(e.method, *c, rc, e.f));
-        th::need(e.nu > 0.0);
-        th_nusselt_result r{};
-        r.nu = e.nu;
-        r.method = e.method;
-        r.method_name = th::used_name(e.method, *c);
-        r.reason = e.reason;
-        r.range_note = rc.note();
-        r.f = e.f;
-        *out = r;
+        const double nu = th::checked(th::evaluate(e.method, *c, rc, e.f));
+        th::need(nu > 0.0);
+        // Written only now: a failed call leaves *out untouched.
+        out->nu = nu;
+        out->method = e.method;
+        out->method_name = th::used_name(e.method, *c);
+        out->reason = e.reason;
+        out->range_note = rc.note();
+        out->f = e.f;
         return rc.status();
+    });
+}
+
+int th_nusselt_array(int method, const th_conditions *shared, std::size_t n, const double *re,
+                     const double *pr, const double *l_over_d, double *nu, int *status) {
+    return th::guard([&] {
+        if (method < 0 || method >= TH_NU_METHOD_COUNT) th::fail(TH_ERR_METHOD);
+        th::need(shared != nullptr);
+        if (n == 0) return int{TH_OK};
+        th::need(re != nullptr && pr != nullptr && nu != nullptr && status != nullptr);
+        const th::row_columns in{re, pr, l_over_d};
+        if (method == TH_NU_AUTO) return th::nusselt_rows_auto(*shared, n, in, nu, status);
+        return th::with_method(method, [&](auto m) {
+            return th::nusselt_rows<decltype(m)::value>(*shared, n, in, nu, status);
+        });
     });
 }
 

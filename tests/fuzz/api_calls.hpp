@@ -669,6 +669,115 @@ inline void call_th_nusselt_method_name(source &s, outcome &o) {
                       th_nusselt_method_from_name, TH_NU_METHOD_COUNT);
 }
 
+// ---- the *_array functions ----------------------------------------------------
+// Up to this many rows per call: enough to mix good and bad rows, few
+// enough that every row can be re-run through the single-row function.
+constexpr int max_array_rows = 6;
+
+// A row count 0..max_array_rows (the arrays passed are that long; a count
+// beyond a caller's arrays is a caller's bug, not an input to try).
+inline int draw_row_count(source &s) {
+    const int n = s.choice(max_array_rows + 1, 3);
+    return n < 0 ? 0 : n > max_array_rows ? max_array_rows : n;
+}
+
+// An input array of n values of kind k, or NULL when the source asks.
+struct array_in {
+    double v[max_array_rows] = {};
+    bool null = false;
+    array_in(source &s, int n, kind k) : null(s.null_pointer()) {
+        for (int i = 0; i < n; ++i) v[i] = s.real(k);
+    }
+    const double *ptr() const { return null ? nullptr : v; }
+};
+
+// Checks an *_array call against its rows: a bad call (unknown method, a
+// NULL array) writes nothing; otherwise every row holds what the
+// single-row function `one(i, &value)` gives (bit for bit, NaN for a failed
+// row) and the return value is the first failed row's code, else
+// TH_WARN_RANGE when any warned, else TH_OK.
+template <class One>
+void check_rows(const char *fn, int st, int n, bool bad_call, const out_slot<double[max_array_rows]> &values,
+                const out_slot<int[max_array_rows]> &statuses, outcome &o, One &&one) {
+    o.status = st;
+    if (!status_is_defined(st)) violation(fn, "returned an undefined status code");
+    if (bad_call || n == 0) {
+        if (!values.untouched() || !statuses.untouched()) violation(fn, "wrote rows on a bad or empty call");
+        if (n == 0 && !bad_call && st != TH_OK) violation(fn, "an empty call did not return TH_OK");
+        if (bad_call && !TH_FAILED(st)) violation(fn, "success on a bad call");
+        return;
+    }
+    int expected = TH_OK;
+    for (int i = 0; i < n; ++i) {
+        const int row_status = statuses.value()[i];
+        const double value = values.value()[i];
+        double single = 0.0;
+        const int single_status = one(i, &single);
+        if (row_status != single_status) violation(fn, "a row's status differs from the single-row call");
+        if (TH_FAILED(row_status)) {
+            if (!std::isnan(value)) violation(fn, "a failed row's value is not NaN");
+            if (expected == TH_OK || expected == TH_WARN_RANGE) expected = row_status;
+        } else {
+            if (std::memcmp(&value, &single, sizeof value) != 0)
+                violation(fn, "a row's value differs from the single-row call");
+            record_real(fn, o, value);
+            if (row_status == TH_WARN_RANGE && expected == TH_OK) expected = TH_WARN_RANGE;
+        }
+        o.add_int(row_status);
+    }
+    if (st != expected) violation(fn, "return value is not the first failed row / warning / TH_OK");
+}
+
+inline void call_th_friction_factor_array(source &s, outcome &o) {
+    const int method = s.choice(TH_F_METHOD_COUNT);
+    const int n = draw_row_count(s);
+    const array_in re(s, n, kind::reynolds);
+    const double rr = s.real(kind::roughness);
+    out_slot<double[max_array_rows]> f(s);
+    out_slot<int[max_array_rows]> status(s);
+    const int st = th_friction_factor_array(method, static_cast<std::size_t>(n), re.ptr(), rr,
+                                            f.is_null() ? nullptr : *f.ptr(),
+                                            status.is_null() ? nullptr : *status.ptr());
+    const bool bad_call = method < 0 || method >= TH_F_METHOD_COUNT ||
+                          (n > 0 && (re.null || f.is_null() || status.is_null()));
+    check_rows("th_friction_factor_array", st, n, bad_call, f, status, o,
+               [&](int i, double *one) { return th_friction_factor(method, re.v[i], rr, one); });
+}
+
+inline void call_th_nusselt_array(source &s, outcome &o) {
+    const int method = s.choice(TH_NU_METHOD_COUNT);
+    const int n = draw_row_count(s);
+    th_conditions shared;
+    draw_conditions(s, shared);
+    const bool null_shared = s.null_pointer();
+    const array_in re(s, n, kind::reynolds);
+    const array_in pr(s, n, kind::prandtl);
+    const array_in ld(s, n, kind::x_over_d);  // NULL: shared.l_over_d for every row
+    out_slot<double[max_array_rows]> nu(s);
+    out_slot<int[max_array_rows]> status(s);
+    for (int i = 0; i < n; ++i)
+        if (method == TH_NU_COMBINED_ENTRY_NUMERIC && known_issue_combined_entry_pr(pr.v[i])) {
+            o.status = skipped_known_issue;
+            return;
+        }
+    const int st = th_nusselt_array(method, null_shared ? nullptr : &shared,
+                                    static_cast<std::size_t>(n), re.ptr(), pr.ptr(), ld.ptr(),
+                                    nu.is_null() ? nullptr : *nu.ptr(),
+                                    status.is_null() ? nullptr : *status.ptr());
+    const bool bad_call = method < 0 || method >= TH_NU_METHOD_COUNT || null_shared ||
+                          (n > 0 && (re.null || pr.null || nu.is_null() || status.is_null()));
+    check_rows("th_nusselt_array", st, n, bad_call, nu, status, o, [&](int i, double *one) {
+        th_conditions c = shared;
+        c.re = re.v[i];
+        c.pr = pr.v[i];
+        if (!ld.null) c.l_over_d = ld.v[i];
+        th_nusselt_result r{};
+        const int single = th_nusselt(method, &c, &r);
+        *one = r.nu;
+        return single;
+    });
+}
+
 // ---- energy balance -------------------------------------------------------------
 TH_ROB_SIMPLE(th_heat_rate, kind::mass_flow, kind::cp, kind::t_inlet, kind::t_target)
 TH_ROB_SIMPLE(th_lmtd, kind::delta_t, kind::delta_t)
@@ -1306,6 +1415,7 @@ inline const api_call api_calls[] = {
     TH_ROB_ROW(th_entry_length_thermal),
     TH_ROB_ROW(th_entry_state),
     TH_ROB_ROW(th_friction_factor),
+    TH_ROB_ROW(th_friction_factor_array),
     TH_ROB_ROW(th_pressure_drop),
     TH_ROB_ROW(th_pressure_drop_mass_flow),
     TH_ROB_ROW(th_friction_method_from_name),
@@ -1314,6 +1424,7 @@ inline const api_call api_calls[] = {
     // th_nusselt reaches the exact thermal-entry series and the combined-
     // entry solver (both cached) when the library has them.
     TH_ROB_CACHED_ROW(th_nusselt),
+    TH_ROB_CACHED_ROW(th_nusselt_array),
     TH_ROB_ROW(th_nusselt_method_from_name),
     TH_ROB_ROW(th_nusselt_method_name),
     TH_ROB_ROW(th_heat_rate),

@@ -208,30 +208,121 @@ TEST_CASE("nusselt: range warnings name the violated limit", "[nusselt][range]")
     CHECK(th_nusselt(TH_NU_SIEDER_TATE_LAMINAR, &c, &r) == TH_WARN_RANGE);
 }
 
+namespace {
+// The fields each method reads beyond re, pr and l_over_d: a transcription
+// of the table in tubeheat.h (th_conditions), kept here as the test's own
+// copy so that a change to either shows.
+enum field { averaging, wall, direction, entry, mu_ratio, roughness, correction, length_factor, duct,
+             duct_ratio, field_count };
+bool reads(int method, field f) {
+    const bool circle_laminar = f == averaging || f == wall || f == entry || f == duct;
+    switch (method) {
+    case TH_NU_AUTO:  // the base case below chooses Gnielinski
+        return circle_laminar || f == roughness || f == correction || f == length_factor;
+    case TH_NU_LAMINAR_DEVELOPED: return f == wall || f == duct || f == duct_ratio;
+    case TH_NU_DITTUS_BOELTER: return f == direction;
+    case TH_NU_SIEDER_TATE: return f == mu_ratio;
+    case TH_NU_PETUKHOV: return f == roughness;
+    case TH_NU_GNIELINSKI:
+        return f == averaging || f == roughness || f == correction || f == length_factor;
+    case TH_NU_GNIELINSKI_TRANSITION:
+        return f == averaging || f == roughness || f == correction || f == length_factor || f == wall ||
+               f == entry;
+    case TH_NU_SIEDER_TATE_LAMINAR: return circle_laminar || f == mu_ratio;
+    case TH_NU_LIQUID_METAL: return f == wall;
+    default: return circle_laminar;  // Hausen, Shah, laminar composite, exact, combined
+    }
+}
+// A case each method computes without error.
+th_conditions valid_case(int method) {
+    th_conditions c = base(5e4, 5.0);
+    c.l_over_d = 50.0;
+    switch (method) {
+    case TH_NU_LAMINAR_DEVELOPED: case TH_NU_HAUSEN: case TH_NU_SIEDER_TATE_LAMINAR: case TH_NU_SHAH:
+    case TH_NU_GNIELINSKI_LAMINAR: case TH_NU_GRAETZ_EXACT: case TH_NU_COMBINED_ENTRY_NUMERIC:
+        c.re = 1000.0;
+        break;
+    case TH_NU_GNIELINSKI_TRANSITION: c.re = 5000.0; break;
+    case TH_NU_LIQUID_METAL: c.pr = 0.01; break;
+    default: break;
+    }
+    return c;
+}
+// Put a value no method accepts into field f.
+void spoil(th_conditions &c, field f) {
+    switch (f) {
+    case averaging: c.averaging = 7; break;
+    case wall: c.wall = 7; break;
+    case direction: c.direction = -1; break;
+    case entry: c.entry = 2; break;
+    case mu_ratio: c.mu_ratio = 0.0; break;  // an empty spreadsheet cell: not a default
+    case roughness: c.rel_roughness = -1e-3; break;
+    case correction: c.correction = TH_CORR_LIQUID; c.pr_wall = 0.0; break;  // pr_wall missing
+    case length_factor: c.length_factor = 2; break;
+    case duct: c.duct = 9; break;
+    case duct_ratio: c.duct = TH_DUCT_RECTANGLE; c.duct_ratio = 0.0; break;
+    default: break;
+    }
+}
+}  // namespace
+
+TEST_CASE("nusselt: each method checks the fields it reads and ignores the rest", "[nusselt][input]") {
+    // Source: the contract in tubeheat.h (th_conditions). A bad value in a
+    // field the method reads is TH_ERR_INPUT with *out untouched; in a
+    // field it does not read it changes nothing, bit for bit.
+    for (int m = 0; m < TH_NU_METHOD_COUNT; ++m) {
+        const th_conditions good = valid_case(m);
+        th_nusselt_result ref{};
+        const int ref_status = th_nusselt(m, &good, &ref);
+        INFO("method " << th_nusselt_method_name(m));
+        REQUIRE(th_test::success(ref_status));
+        for (int f = 0; f < field_count; ++f) {
+            INFO("field " << f);
+            th_conditions c = good;
+            spoil(c, field(f));
+            th_nusselt_result r{};
+            r.nu = -7.0;
+            const int st = th_nusselt(m, &c, &r);
+            // duct_ratio is spoiled with a rectangular shape: the laminar
+            // circular-tube fits read the shape (and warn), not the ratio.
+            const bool shape_warns = f == duct_ratio && m != TH_NU_AUTO && !reads(m, duct_ratio) &&
+                                     reads(m, duct);
+            if (reads(m, field(f))) {
+                CHECK(st == TH_ERR_INPUT);
+                CHECK(r.nu == -7.0);
+            } else if (shape_warns) {
+                CHECK(st == TH_WARN_RANGE);
+                CHECK(r.nu == ref.nu);
+            } else {
+                CHECK(st == ref_status);
+                CHECK(r.nu == ref.nu);
+                CHECK(r.f == ref.f);
+                CHECK(std::strcmp(r.range_note, ref.range_note) == 0);
+            }
+        }
+    }
+}
+
 TEST_CASE("nusselt: bad input and inconsistent requests", "[nusselt][input]") {
     const double nan = std::numeric_limits<double>::quiet_NaN();
     th_nusselt_result r{};
     r.nu = -7.0;
     for (int m = 0; m < TH_NU_METHOD_COUNT; ++m) {
-        th_conditions c = base(5e4, 5.0);
+        // re, pr and l_over_d: read by every method.
+        th_conditions c = valid_case(m);
         c.re = 0.0;
         CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
-        c = base(5e4, nan);
+        c = valid_case(m);
+        c.pr = nan;
         CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
-        c = base(5e4, 5.0);
+        c = valid_case(m);
         c.l_over_d = -1.0;
         CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
-        c = base(5e4, 5.0);
-        c.mu_ratio = 0.0;  // an empty spreadsheet cell: not a default
-        CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
-        c = base(5e4, 5.0);
-        c.wall = 7;
-        CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
-        c = base(5e4, 5.0);
-        c.correction = TH_CORR_LIQUID;  // pr_wall left at 0
+        c = valid_case(m);
+        c.re = std::numeric_limits<double>::infinity();
         CHECK(th_nusselt(m, &c, &r) == TH_ERR_INPUT);
         CHECK(th_nusselt(m, nullptr, &r) == TH_ERR_INPUT);
-        c = base(5e4, 5.0);
+        c = valid_case(m);
         CHECK(th_nusselt(m, &c, nullptr) == TH_ERR_INPUT);
     }
     CHECK(r.nu == -7.0);

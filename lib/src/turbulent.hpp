@@ -1,25 +1,37 @@
-// turbulent.cpp - turbulent and transitional Nusselt correlations, and the
-// liquid-metal ones.
-#include "correlations.hpp"
+// turbulent.hpp - turbulent and transitional Nusselt correlations, and the
+// liquid-metal ones. Defined inline here, not in a .cpp: they are the
+// library's most called code, and only with their bodies visible can
+// th_nusselt() keep the range bookkeeping in registers and fold the
+// validation into straight-line code (docs/performance.md: API overhead).
+// Included by correlations.hpp. Not installed.
+#ifndef TUBEHEAT_TURBULENT_HPP
+#define TUBEHEAT_TURBULENT_HPP
+
 #include "friction_internal.hpp"
+#include "internal.hpp"
 
 #include <cmath>
 
 namespace th {
-namespace {
 
-void length_at_least_10d(const th_conditions &c, range_check &rc, const char *note) {
+double nu_gnielinski_laminar_at(const th_conditions &c, double re, range_check &rc);
+
+namespace turbulent_detail {
+
+template <class Range>
+inline void length_at_least_10d(const th_conditions &c, Range &rc, const char *note) {
     rc.require(c.l_over_d >= 10.0, note);
 }
 
 // Darcy f for the Gnielinski/Petukhov forms: Petukhov's smooth-tube fit,
 // Colebrook when the tube is rough.
-double friction_for(const th_conditions &c, double re) {
+inline double friction_for(const th_conditions &c, double re) {
     return c.rel_roughness > 0.0 ? colebrook(re, c.rel_roughness) : petukhov_f(re);
 }
 
 // Gnielinski's property-variation factor K (from memory: VDI Heat Atlas).
-double property_factor(const th_conditions &c, range_check &rc) {
+template <class Range>
+inline double property_factor(const th_conditions &c, Range &rc) {
     switch (c.correction) {
     case TH_CORR_NONE:
         return 1.0;
@@ -38,39 +50,43 @@ double property_factor(const th_conditions &c, range_check &rc) {
     }
 }
 
-}  // namespace
+}  // namespace turbulent_detail
 
-double nu_dittus_boelter(const th_conditions &c, range_check &rc) {
+template <class Range>
+inline double nu_dittus_boelter(const th_conditions &c, Range &rc) {
     // Dittus & Boelter (1930) as usually quoted: n = 0.4 heating, 0.3 cooling.
     rc.require(c.re >= 1e4, "Re below 1e4 (Dittus-Boelter range Re >= 1e4)");
     rc.require(c.pr >= 0.6 && c.pr <= 160.0, "Pr outside Dittus-Boelter range 0.6..160");
-    length_at_least_10d(c, rc, "L/D below 10 (Dittus-Boelter needs developed flow)");
+    turbulent_detail::length_at_least_10d(c, rc, "L/D below 10 (Dittus-Boelter needs developed flow)");
     const double n = c.direction == TH_HEATING ? 0.4 : 0.3;
     return 0.023 * std::pow(c.re, 0.8) * std::pow(c.pr, n);
 }
 
-double nu_sieder_tate(const th_conditions &c, range_check &rc) {
+template <class Range>
+inline double nu_sieder_tate(const th_conditions &c, Range &rc) {
     // Sieder & Tate (1936), turbulent.
     rc.require(c.re >= 1e4, "Re below 1e4 (Sieder-Tate range Re >= 1e4)");
     rc.require(c.pr >= 0.7 && c.pr <= 16700.0, "Pr outside Sieder-Tate range 0.7..16700");
-    length_at_least_10d(c, rc, "L/D below 10 (Sieder-Tate needs developed flow)");
+    turbulent_detail::length_at_least_10d(c, rc, "L/D below 10 (Sieder-Tate needs developed flow)");
     return 0.027 * std::pow(c.re, 0.8) * std::cbrt(c.pr) * std::pow(c.mu_ratio, 0.14);
 }
 
-double nu_petukhov(const th_conditions &c, range_check &rc, double &f) {
+template <class Range>
+inline double nu_petukhov(const th_conditions &c, Range &rc, double &f) {
     // Petukhov (1970).
     rc.require(c.re >= 1e4, "Re below 1e4 (Petukhov range 1e4..5e6)");
     rc.require(c.re <= 5e6, "Re above 5e6 (Petukhov range 1e4..5e6)");
     rc.require(c.pr >= 0.5 && c.pr <= 2000.0, "Pr outside Petukhov range 0.5..2000");
     rc.require(c.rel_roughness == 0.0, "Petukhov is for smooth tubes (Colebrook f used for the roughness)");
-    length_at_least_10d(c, rc, "L/D below 10 (Petukhov needs developed flow)");
-    f = friction_for(c, c.re);
+    turbulent_detail::length_at_least_10d(c, rc, "L/D below 10 (Petukhov needs developed flow)");
+    f = turbulent_detail::friction_for(c, c.re);
     const double f8 = f / 8.0;
     return f8 * c.re * c.pr / (1.07 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
 }
 
-double nu_gnielinski_at(const th_conditions &c, double re, range_check &rc, double &f) {
-    f = friction_for(c, re);
+template <class Range>
+inline double nu_gnielinski_at(const th_conditions &c, double re, Range &rc, double &f) {
+    f = turbulent_detail::friction_for(c, re);
     const double f8 = f / 8.0;
     double nu = f8 * (re - 1000.0) * c.pr /
                 (1.0 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
@@ -80,10 +96,11 @@ double nu_gnielinski_at(const th_conditions &c, double re, range_check &rc, doub
         const double g = std::pow(1.0 / c.l_over_d, 2.0 / 3.0);
         nu *= c.averaging == TH_MEAN ? 1.0 + g : 1.0 + g / 3.0;
     }
-    return nu * property_factor(c, rc);
+    return nu * turbulent_detail::property_factor(c, rc);
 }
 
-double nu_gnielinski(const th_conditions &c, range_check &rc, double &f) {
+template <class Range>
+inline double nu_gnielinski(const th_conditions &c, Range &rc, double &f) {
     // Gnielinski (1976).
     rc.require(c.re >= 3000.0, "Re below 3000 (Gnielinski range 3e3..5e6)");
     rc.require(c.re <= 5e6, "Re above 5e6 (Gnielinski range 3e3..5e6)");
@@ -91,7 +108,8 @@ double nu_gnielinski(const th_conditions &c, range_check &rc, double &f) {
     return nu_gnielinski_at(c, c.re, rc, f);
 }
 
-double nu_gnielinski_transition(const th_conditions &c, range_check &rc, double &f) {
+template <class Range>
+inline double nu_gnielinski_transition(const th_conditions &c, Range &rc, double &f) {
     // Gnielinski (2013): linear in Re between the laminar mean composite at
     // Re = 2300 and the turbulent value at Re = 1e4 (mean values only).
     need(c.averaging == TH_MEAN);
@@ -103,14 +121,15 @@ double nu_gnielinski_transition(const th_conditions &c, range_check &rc, double 
     const double lam = nu_gnielinski_laminar_at(c, TH_RE_LAMINAR_MAX, ignore);
     double f_turb = 0.0;
     const double turb = nu_gnielinski_at(c, TH_RE_TURBULENT_MIN, rc, f_turb);
-    f = friction_for(c, c.re);
+    f = turbulent_detail::friction_for(c, c.re);
     return (1.0 - g) * lam + g * turb;
 }
 
-double nu_liquid_metal(const th_conditions &c, range_check &rc) {
+template <class Range>
+inline double nu_liquid_metal(const th_conditions &c, Range &rc) {
     const double pe = c.re * c.pr;
     rc.require(c.pr < 0.1, "Pr >= 0.1: liquid-metal correlation applied to an ordinary fluid");
-    length_at_least_10d(c, rc, "L/D below 10 (liquid-metal correlations need developed flow)");
+    turbulent_detail::length_at_least_10d(c, rc, "L/D below 10 (liquid-metal correlations need developed flow)");
     if (c.wall == TH_WALL_H) {
         // Skupinski, Tortel & Vautrey (1965), uniform flux (from memory).
         rc.require(c.re >= 3.6e3 && c.re <= 9.05e5, "Re outside Skupinski range 3.6e3..9.05e5");
@@ -124,3 +143,5 @@ double nu_liquid_metal(const th_conditions &c, range_check &rc) {
 }
 
 }  // namespace th
+
+#endif
