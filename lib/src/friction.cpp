@@ -152,7 +152,7 @@ double friction_checked_of(double re, double rr, Range &rc) {
 }
 
 // Method M for every row of th_friction_factor_array: the row inputs in a
-// branch-free first pass, then only the rows that passed are computed.
+// first pass over the column, then only the rows that passed are computed.
 template <int M>
 int friction_rows(std::size_t n, const double *re, double rr, int shared_status, double *f, int *status) {
     for (std::size_t i = 0; i < n; ++i) status[i] = positive_finite(re[i]) ? shared_status : TH_ERR_INPUT;

@@ -65,8 +65,8 @@ inline void need_finite(double x) { need(finite(x)); }
 inline void need_positive_or_inf(double x) { need(!std::isnan(x) && x > 0.0); }
 inline void need_temperature(double t) { need(finite(t) && t > 0.0); }
 
-// The same tests as expressions, for loops over many rows: no branch is
-// needed, so the compiler can vectorise them.
+// The same tests as plain expressions (nothing thrown), for the first pass
+// of the *_array functions over their input columns.
 inline bool positive_finite(double x) { return x > 0.0 && x <= std::numeric_limits<double>::max(); }
 inline bool positive_or_inf(double x) { return x > 0.0; }  // false for NaN
 

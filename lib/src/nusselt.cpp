@@ -303,7 +303,7 @@ int nusselt_rows_auto(const th_conditions &shared, std::size_t n, const row_colu
 }
 
 // Method M for every row. What th_nusselt checks on every call is split:
-// the shared fields once, the row inputs in a branch-free first pass, and
+// the shared fields once, the row inputs in a first pass over the columns, and
 // only the rows that passed are computed.
 template <int M>
 int nusselt_rows(const th_conditions &shared, std::size_t n, const row_columns &in, double *nu,
@@ -314,8 +314,10 @@ int nusselt_rows(const th_conditions &shared, std::size_t n, const row_columns &
         if (in.l_over_d == nullptr) need_positive_or_inf(shared.l_over_d);
         return TH_OK;
     });
-    for (std::size_t i = 0; i < n; ++i)
-        status[i] = positive_finite(in.re[i]) & positive_finite(in.pr[i]) ? shared_status : TH_ERR_INPUT;
+    for (std::size_t i = 0; i < n; ++i) {
+        const bool ok = positive_finite(in.re[i]) && positive_finite(in.pr[i]);
+        status[i] = ok ? shared_status : TH_ERR_INPUT;
+    }
     if (in.l_over_d != nullptr)
         for (std::size_t i = 0; i < n; ++i)
             if (!positive_or_inf(in.l_over_d[i])) status[i] = TH_ERR_INPUT;
