@@ -1,147 +1,19 @@
 // bench_core.cpp - the core correlations through the C API, each next to a
-// baseline: the same formula written inline here, fed the same inputs, so
+// baseline: the same formula written inline (baselines.hpp), fed the same
+// inputs, so
 // the API's overhead (validation, dispatch, range bookkeeping) shows as a
 // ratio measured in the same run. Report ratios with bench/ratios.py.
+#include "baselines.hpp"
 #include "tubeheat.h"
 
 #include <benchmark/benchmark.h>
 
 #include <array>
-#include <cmath>
-#include <limits>
+#include <cstdint>
 
 namespace {
 
-// Inputs spread over the range so the branch predictor and the math library
-// see realistic variety; the same arrays feed baseline and API. Turbulent
-// rows (Re 1.2e4..4.8e6, Pr 0.7..70, mu_b/mu_w 0.5..3, eps/D 0 or
-// 1e-5..1e-2) for the turbulent methods and the friction factors; laminar
-// rows (Re 100..2000, L/D 5..2000) for the laminar ones; transitional
-// (Re 2300..1e4, L/D 5..2000) and liquid-metal (Pr 0.004..0.03) rows for theirs.
-constexpr std::size_t n_inputs = 256;
-struct inputs {
-    std::array<double, n_inputs> re{}, pr{}, rr{}, mu{}, re_lam{}, ld{}, re_tr{}, pr_lm{};
-    inputs() {
-        for (std::size_t i = 0; i < n_inputs; ++i) {
-            const double u = double(i) / n_inputs;
-            const auto shuffled = [i](std::size_t k) { return double((i * k) % n_inputs) / n_inputs; };
-            re[i] = 1.2e4 * std::pow(400.0, u);
-            pr[i] = 0.7 * std::pow(100.0, shuffled(37));
-            rr[i] = i % 4 == 0 ? 0.0 : 1e-5 * std::pow(1000.0, shuffled(11));
-            mu[i] = 0.5 * std::pow(6.0, shuffled(53));
-            re_lam[i] = 100.0 * std::pow(20.0, shuffled(29));
-            ld[i] = 5.0 * std::pow(400.0, shuffled(71));
-            re_tr[i] = 2300.0 + 7700.0 * shuffled(17);
-            pr_lm[i] = 0.004 * std::pow(7.5, shuffled(41));
-        }
-    }
-};
-const inputs in;
-
-// The rows each method is measured on, as conditions for the API.
-enum class rows { turbulent, laminar, transition, liquid_metal };
-th_conditions conditions_for(rows kind, std::size_t i) {
-    th_conditions c;
-    th_conditions_init(&c);
-    c.re = in.re[i];
-    c.pr = in.pr[i];
-    c.mu_ratio = in.mu[i];
-    switch (kind) {
-    case rows::turbulent: break;
-    case rows::laminar:
-        c.re = in.re_lam[i];
-        c.l_over_d = in.ld[i];
-        break;
-    case rows::transition:
-        c.re = in.re_tr[i];
-        c.l_over_d = in.ld[i];
-        break;
-    case rows::liquid_metal: c.pr = in.pr_lm[i]; break;
-    }
-    return c;
-}
-
-// ---- baselines: the formulas inline --------------------------------------
-inline double petukhov_f(double re) {
-    const double t = 0.790 * std::log(re) - 1.64;
-    return 1.0 / (t * t);
-}
-double db_inline(const th_conditions &c) { return 0.023 * std::pow(c.re, 0.8) * std::pow(c.pr, 0.4); }
-double st_inline(const th_conditions &c) {
-    return 0.027 * std::pow(c.re, 0.8) * std::cbrt(c.pr) * std::pow(c.mu_ratio, 0.14);
-}
-double petukhov_inline(const th_conditions &c) {
-    const double f8 = petukhov_f(c.re) / 8.0;
-    return f8 * c.re * c.pr / (1.07 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
-}
-double gnielinski_inline(const th_conditions &c) {
-    const double f8 = petukhov_f(c.re) / 8.0;
-    return f8 * (c.re - 1000.0) * c.pr / (1.0 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
-}
-// Fully developed, circular, uniform wall temperature: a constant.
-double laminar_developed_inline(const th_conditions &) { return 3.6568; }
-double hausen_inline(const th_conditions &c) {
-    const double gz = c.re * c.pr / c.l_over_d;
-    return 3.66 + 0.0668 * gz / (1.0 + 0.04 * std::pow(gz, 2.0 / 3.0));
-}
-double sieder_tate_laminar_inline(const th_conditions &c) {
-    return 1.86 * std::cbrt(c.re * c.pr / c.l_over_d) * std::pow(c.mu_ratio, 0.14);
-}
-// Shah's mean T fit, combined-entry default conditions of the API aside
-// (the API warns, computes the same fit).
-double shah_inline(const th_conditions &c) {
-    const double xs = c.l_over_d / (c.re * c.pr);
-    const double cr = std::cbrt(xs);
-    return xs <= 0.005 ? 1.615 / cr - 0.7 : (xs < 0.03 ? 1.615 / cr - 0.2 : 3.657 + 0.0499 / xs);
-}
-// Gnielinski's laminar mean composite, T, combined entry.
-double gnielinski_laminar_inline(const th_conditions &c, double re) {
-    const double z = re * c.pr / c.l_over_d;
-    const double t2 = 1.615 * std::cbrt(z) - 0.7;
-    const double t3 = std::pow(2.0 / (1.0 + 22.0 * c.pr), 1.0 / 6.0) * std::sqrt(z);
-    return std::cbrt(3.66 * 3.66 * 3.66 + 0.7 * 0.7 * 0.7 + t2 * t2 * t2 + t3 * t3 * t3);
-}
-double gnielinski_laminar_inline(const th_conditions &c) { return gnielinski_laminar_inline(c, c.re); }
-// Gnielinski 2013: linear in Re between the laminar composite at 2300 and
-// the turbulent value (with its length factor) at 1e4.
-double gnielinski_transition_inline(const th_conditions &c) {
-    const double g = (c.re - 2300.0) / 7700.0;
-    const double lam = gnielinski_laminar_inline(c, 2300.0);
-    const double f8 = petukhov_f(1e4) / 8.0;
-    const double turb = f8 * (1e4 - 1000.0) * c.pr /
-                        (1.0 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0)) *
-                        (1.0 + std::pow(1.0 / c.l_over_d, 2.0 / 3.0));
-    return (1.0 - g) * lam + g * turb;
-}
-double seban_shimazaki_inline(const th_conditions &c) { return 5.0 + 0.025 * std::pow(c.re * c.pr, 0.8); }
-
-double haaland_inline(double re, double rr) {
-    const double t = -1.8 * std::log10(std::pow(rr / 3.7, 1.11) + 6.9 / re);
-    return 1.0 / (t * t);
-}
-double swamee_jain_inline(double re, double rr) {
-    const double t = std::log10(rr / 3.7 + 5.74 / std::pow(re, 0.9));
-    return 0.25 / (t * t);
-}
-// Churchill (1977) as usually typed: the powers as written.
-double churchill_inline(double re, double rr) {
-    const double a = std::pow(-2.457 * std::log(std::pow(7.0 / re, 0.9) + 0.27 * rr), 16.0);
-    const double b = std::pow(37530.0 / re, 16.0);
-    return 8.0 * std::pow(std::pow(8.0 / re, 12.0) + 1.0 / std::pow(a + b, 1.5), 1.0 / 12.0);
-}
-double petukhov_friction_inline(double re, double) { return petukhov_f(re); }
-double laminar_friction_inline(double re, double) { return 64.0 / re; }
-// Colebrook baseline: the classic fixed-point iteration (what a spreadsheet
-// user would otherwise type), to 1e-12 relative.
-double colebrook_iterative(double re, double rr) {
-    double x = 8.0;
-    for (int k = 0; k < 100; ++k) {
-        const double nx = -2.0 * std::log10(rr / 3.7 + 2.51 * x / re);
-        if (std::fabs(nx - x) < 1e-12 * nx) return 1.0 / (nx * nx);
-        x = nx;
-    }
-    return 1.0 / (x * x);
-}
+using namespace th_bench;
 
 // ---- the loops ---------------------------------------------------------------
 // Every variant reports items (calls or rows) processed, so that
@@ -198,11 +70,6 @@ void run_inline_f(benchmark::State &st, double (*f)(double, double)) {
         i = (i + 1) % n_inputs;
     }
     st.SetItemsProcessed(st.iterations());
-}
-
-// Laminar friction is measured on laminar Re, the others on turbulent Re.
-const std::array<double, n_inputs> &re_for(int method) {
-    return method == TH_F_LAMINAR ? in.re_lam : in.re;
 }
 
 void run_inline_f_laminar(benchmark::State &st, double (*f)(double, double)) {

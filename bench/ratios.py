@@ -18,7 +18,10 @@ import sys
 def main(path):
     data = json.load(open(path))
     rows = collections.OrderedDict()
-    for b in data["benchmarks"]:
+    # Registration order (family_index), not run order: with
+    # --benchmark_enable_random_interleaving the runs come shuffled.
+    benchmarks = sorted(data["benchmarks"], key=lambda b: b.get("family_index", 0))
+    for b in benchmarks:
         if b.get("run_type") == "aggregate" and b.get("aggregate_name") != "median":
             continue
         name = b.get("run_name", b["name"])
@@ -37,7 +40,7 @@ def main(path):
     print("|---|---|---|---|---|")
     for pair, vs in rows.items():
         base = next((t for v, t in vs.items() if v.startswith("inline")), None)
-        for v, t in vs.items():
+        for v, t in sorted(vs.items(), key=lambda vt: not vt[0].startswith("inline")):
             ratio = "%.2f" % (t / base) if base else "-"
             print("| %s | %s | %.1f | %.3g | %s |" % (pair, v, t, 1e9 / t, ratio))
 

@@ -1,6 +1,6 @@
 #!/usr/bin/python3
 """Instructions per call of the C API against the inline formula, from a
-callgrind profile of bench/calc/instr_count.c (see bench/calc/run.sh).
+callgrind profile of bench/calc/instr_count.cpp (see bench/calc/run.sh).
 
     instr_table.py callgrind.out [calls per run, default 102400]
 
@@ -17,7 +17,7 @@ def main(path: str, calls: int) -> None:
     text = subprocess.run(["callgrind_annotate", "--inclusive=yes", "--threshold=100", path],
                           capture_output=True, text=True, check=True).stdout
     cost = {}
-    for m in re.finditer(r"^\s*([\d,]+) .*?:run_(\w+)_(inline|api|array) ", text, re.M):
+    for m in re.finditer(r"^\s*([\d,]+) .*?:run_(\w+)_(inline|api|array)\(\)", text, re.M):
         cost[(m.group(2), m.group(3))] = int(m.group(1).replace(",", "")) / calls
     print("## Library (callgrind, instructions per call, deterministic)")
     print()

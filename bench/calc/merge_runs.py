@@ -24,8 +24,9 @@ def main(out_path, paths):
     benchmarks = []
     for name, entries in by_name.items():
         b = dict(entries[0])
-        for key in ("cpu_time", "real_time"):
-            b[key] = statistics.median(e[key] for e in entries)
+        for key in ("cpu_time", "real_time", "items_per_second"):
+            if all(key in e for e in entries):
+                b[key] = statistics.median(e[key] for e in entries)
         b["runs_merged"] = len(entries)
         benchmarks.append(b)
     merged["benchmarks"] = benchmarks

@@ -6,7 +6,7 @@
 # 1. configures and builds a Release tree (library, benchmarks, .oxt);
 # 2. library: Google Benchmark (3 runs x 5 repetitions, medians) ->
 #    bench/calc/merge_runs.py -> bench/ratios.py,
-#    and instruction counts under callgrind (bench/calc/instr_count.c);
+#    and instruction counts under callgrind (bench/calc/instr_count.cpp);
 # 3. spreadsheet: bench/calc/calc_bench.py - 200,000 rows of Gnielinski Nu
 #    as native formulas, as TH.NUSSELT per row and as one TH.NUSSELT.TABLE,
 #    each recalculated headless `runs` times, plus every workbook in
@@ -39,7 +39,7 @@ report="$out/report.md"
 
 # ---- library: CPU time, three separate runs of 5 repetitions ------------------
 for k in 1 2 3; do
-  "$build/bench/tubeheat_bench" --benchmark_repetitions=5 \
+  "$build/bench/tubeheat_bench" --benchmark_repetitions=5 --benchmark_enable_random_interleaving=true \
     --benchmark_report_aggregates_only=true \
     --benchmark_out="$out/lib_bench_$k.json" --benchmark_out_format=json >"$out/lib_bench_$k.txt"
 done
@@ -53,8 +53,8 @@ done
 
 # ---- library: instruction counts (deterministic) -----------------------------
 if command -v valgrind >/dev/null; then
-  cc -O2 -Wall -Wextra -I lib/include bench/calc/instr_count.c -L"$build/lib" \
-     -Wl,-rpath,"$PWD/$build/lib" -ltubeheat -lm -o "$out/instr_count"
+  c++ -std=c++17 -O2 -Wall -Wextra -I lib/include -I bench bench/calc/instr_count.cpp -L"$build/lib" \
+     -Wl,-rpath,"$PWD/$build/lib" -ltubeheat -o "$out/instr_count"
   valgrind --tool=callgrind --callgrind-out-file="$out/callgrind.out" "$out/instr_count" \
     >/dev/null 2>"$out/callgrind.log"
   /usr/bin/python3 bench/calc/instr_table.py "$out/callgrind.out" >>"$report"
