@@ -46,7 +46,7 @@ constexpr auto display_name = index_names<TH_NU_METHOD_COUNT>(nusselt_names);
 // Which th_conditions fields each method reads, beyond re, pr and
 // l_over_d (read by every method, for the L/D warning at least). Only these
 // are validated: the header promises that a method ignores the rest, so a
-// blank mu_ratio cannot fail a Dittus-Boelter call, and a call pays only for
+// mu_ratio left at 0 cannot fail a Dittus-Boelter call, and a call pays only for
 // the checks it needs (docs/performance.md).
 enum field_read : unsigned {
     reads_averaging = 1u << 0,
