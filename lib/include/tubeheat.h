@@ -271,7 +271,7 @@ TH_API int th_friction_factor_array(int method, size_t n, const double *re,
                                     int *status);
 
 /* ------------------------------------------------------------------------
- * Nusselt number by chosen method     (laminar.cpp, turbulent.cpp,
+ * Nusselt number by chosen method     (laminar.hpp, turbulent.hpp,
  *                                      nusselt.cpp)
  * --------------------------------------------------------------------- */
 typedef enum th_nusselt_method {

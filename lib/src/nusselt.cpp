@@ -137,7 +137,8 @@ struct evaluation {
     const char *reason = "chosen by caller";
 };
 
-double laminar_developed(const th_conditions &c, range_check &rc) {
+template <class Range>
+double laminar_developed(const th_conditions &c, Range &rc) {
     if (c.duct == TH_DUCT_CIRCLE) return nu_laminar_developed(c, rc);
     double f_re = 0.0, nu_t = 0.0, nu_h = 0.0;
     duct_laminar_developed(c.duct, c.duct_ratio, &f_re, &nu_t, &nu_h);
@@ -147,7 +148,8 @@ double laminar_developed(const th_conditions &c, range_check &rc) {
     return c.wall == TH_WALL_T ? nu_t : nu_h;
 }
 
-double graetz_exact(const th_conditions &c, range_check &rc) {
+template <class Range>
+double graetz_exact(const th_conditions &c, Range &rc) {
     rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
     rc.require(c.entry == TH_ENTRY_THERMAL || c.pr > 1e4,
                "exact series is for thermal entry (velocity developed); combined entry requested");
@@ -155,27 +157,13 @@ double graetz_exact(const th_conditions &c, range_check &rc) {
     return thermal_entry_nu(xs, c.wall, c.averaging);
 }
 
-double combined_entry(const th_conditions &c, range_check &rc) {
+template <class Range>
+double combined_entry(const th_conditions &c, Range &rc) {
     rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
     rc.require(c.entry == TH_ENTRY_COMBINED, "combined-entry solution requested for a thermal-entry case");
     const double xs = std::isinf(c.l_over_d) ? c.l_over_d : c.l_over_d / (c.re * c.pr);
     rc.require(c.pr >= 0.5 && c.pr <= 1e4, "Pr outside the validated range 0.5..1e4 of the combined-entry solution");
     return combined_entry_nu(xs, c.pr, c.wall, c.averaging);
-}
-
-// The laminar correlations (laminar.cpp, laminar_entry_*.cpp) keep the
-// first violated limit in a range_check; this passes that on to a
-// range_flag when the array form asks only whether one was violated.
-template <class Range, class Method>
-double with_full_check(Range &rc, Method &&method) {
-    if constexpr (std::is_same_v<Range, range_check>) {
-        return method(rc);
-    } else {
-        range_check full;
-        const double v = method(full);
-        rc.require(full.ok(), full.note());
-        return v;
-    }
 }
 
 // Nu by method `M` from conditions already validated for it (validate<>
@@ -190,22 +178,19 @@ double compute(const th_conditions &c, Range &rc, double &f) {
     // shorter than its diameter; the entry terms then grow without bound
     // (Nu ~ (D/L)^(1/3) and faster).
     rc.require(c.l_over_d >= 1.0, "L/D (or x/D) below 1: shorter than one diameter, beyond every method's data");
+    if constexpr (M == TH_NU_LAMINAR_DEVELOPED) return laminar_developed(c, rc);
     if constexpr (M == TH_NU_DITTUS_BOELTER) return nu_dittus_boelter(c, rc);
     if constexpr (M == TH_NU_SIEDER_TATE) return nu_sieder_tate(c, rc);
     if constexpr (M == TH_NU_PETUKHOV) return nu_petukhov(c, rc, f);
     if constexpr (M == TH_NU_GNIELINSKI) return nu_gnielinski(c, rc, f);
     if constexpr (M == TH_NU_GNIELINSKI_TRANSITION) return nu_gnielinski_transition(c, rc, f);
+    if constexpr (M == TH_NU_HAUSEN) return nu_hausen(c, rc);
+    if constexpr (M == TH_NU_SIEDER_TATE_LAMINAR) return nu_sieder_tate_laminar(c, rc);
+    if constexpr (M == TH_NU_SHAH) return nu_shah(c, rc);
+    if constexpr (M == TH_NU_GNIELINSKI_LAMINAR) return nu_gnielinski_laminar(c, rc);
     if constexpr (M == TH_NU_LIQUID_METAL) return nu_liquid_metal(c, rc);
-    return with_full_check(rc, [&](range_check &full) {
-        if constexpr (M == TH_NU_LAMINAR_DEVELOPED) return laminar_developed(c, full);
-        if constexpr (M == TH_NU_HAUSEN) return nu_hausen(c, full);
-        if constexpr (M == TH_NU_SIEDER_TATE_LAMINAR) return nu_sieder_tate_laminar(c, full);
-        if constexpr (M == TH_NU_SHAH) return nu_shah(c, full);
-        if constexpr (M == TH_NU_GNIELINSKI_LAMINAR) return nu_gnielinski_laminar(c, full);
-        if constexpr (M == TH_NU_GRAETZ_EXACT) return graetz_exact(c, full);
-        if constexpr (M == TH_NU_COMBINED_ENTRY_NUMERIC) return combined_entry(c, full);
-        return 0.0;  // the turbulent methods returned above
-    });
+    if constexpr (M == TH_NU_GRAETZ_EXACT) return graetz_exact(c, rc);
+    if constexpr (M == TH_NU_COMBINED_ENTRY_NUMERIC) return combined_entry(c, rc);
 }
 
 // Dispatch on a method id other than TH_NU_AUTO (which the caller resolves

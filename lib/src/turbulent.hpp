@@ -9,12 +9,11 @@
 
 #include "friction_internal.hpp"
 #include "internal.hpp"
+#include "laminar.hpp"
 
 #include <cmath>
 
 namespace th {
-
-double nu_gnielinski_laminar_at(const th_conditions &c, double re, range_check &rc);
 
 namespace turbulent_detail {
 

@@ -1,45 +1,53 @@
-// laminar.cpp - laminar Nusselt correlations for circular tubes: the
+// laminar.hpp - laminar Nusselt correlations for circular tubes: the
 // fully developed values and the published entry-region fits. The exact
-// entry-region solutions live in laminar_entry_*.cpp.
-#include "correlations.hpp"
+// entry-region solutions live in laminar_entry_*.cpp. Inline, and templates
+// on the range bookkeeping (range_check or range_flag), like turbulent.hpp:
+// see there. Included by correlations.hpp. Not installed.
+#ifndef TUBEHEAT_LAMINAR_HPP
+#define TUBEHEAT_LAMINAR_HPP
+
+#include "internal.hpp"
 
 #include <cmath>
 
 namespace th {
-namespace {
+namespace laminar_detail {
 
 // Fully developed circular-tube values (analytic; Shah & London 1978):
 // T: lambda_0^2 / 2 with lambda_0 the first Graetz eigenvalue;
 // H: 48/11.
-constexpr double nu_circle_t = 3.6567935;
-constexpr double nu_circle_h = 48.0 / 11.0;
+inline constexpr double nu_circle_t = 3.6567935;
+inline constexpr double nu_circle_h = 48.0 / 11.0;
 
-double x_star(const th_conditions &c) { return c.l_over_d / (c.re * c.pr); }
+inline double x_star(const th_conditions &c) { return c.l_over_d / (c.re * c.pr); }
 
-void laminar_regime(const th_conditions &c, range_check &rc) {
+template <class Range>
+inline void laminar_regime(const th_conditions &c, Range &rc) {
     rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
 }
 
 // A mean-only correlation cannot answer a local question: that is an
 // inconsistent request, not an extrapolation.
-void need_mean(const th_conditions &c) { need(c.averaging == TH_MEAN); }
+inline void need_mean(const th_conditions &c) { need(c.averaging == TH_MEAN); }
 
-}  // namespace
+}  // namespace laminar_detail
 
-double nu_laminar_developed(const th_conditions &c, range_check &rc) {
-    laminar_regime(c, rc);
+template <class Range>
+inline double nu_laminar_developed(const th_conditions &c, Range &rc) {
+    laminar_detail::laminar_regime(c, rc);
     // Developed once x* passes the Shah & London thermal entry length
     // (0.0335 for T, 0.0430 for H).
     const double x_fd = c.wall == TH_WALL_T ? 0.0335 : 0.0430;
-    rc.require(std::isinf(c.l_over_d) || x_star(c) >= x_fd,
+    rc.require(std::isinf(c.l_over_d) || laminar_detail::x_star(c) >= x_fd,
                "thermally developing (x* below the entry length): the fully developed value underestimates Nu");
-    return c.wall == TH_WALL_T ? nu_circle_t : nu_circle_h;
+    return c.wall == TH_WALL_T ? laminar_detail::nu_circle_t : laminar_detail::nu_circle_h;
 }
 
-double nu_hausen(const th_conditions &c, range_check &rc) {
+template <class Range>
+inline double nu_hausen(const th_conditions &c, Range &rc) {
     // Hausen (1943): mean, uniform wall temperature, thermal entry.
-    need_mean(c);
-    laminar_regime(c, rc);
+    laminar_detail::need_mean(c);
+    laminar_detail::laminar_regime(c, rc);
     rc.require(c.wall == TH_WALL_T, "Hausen is for uniform wall temperature");
     rc.require(c.entry == TH_ENTRY_THERMAL, "Hausen is a thermal-entry correlation (velocity developed)");
     if (std::isinf(c.l_over_d)) return 3.66;
@@ -47,28 +55,32 @@ double nu_hausen(const th_conditions &c, range_check &rc) {
     return 3.66 + 0.0668 * gz / (1.0 + 0.04 * std::pow(gz, 2.0 / 3.0));
 }
 
-double nu_sieder_tate_laminar(const th_conditions &c, range_check &rc) {
+template <class Range>
+inline double nu_sieder_tate_laminar(const th_conditions &c, Range &rc) {
     // Sieder & Tate (1936): mean, uniform wall temperature, combined entry.
-    need_mean(c);
+    laminar_detail::need_mean(c);
     need(std::isfinite(c.l_over_d));  // the correlation vanishes as L -> inf
-    laminar_regime(c, rc);
+    laminar_detail::laminar_regime(c, rc);
     rc.require(c.pr > 0.48 && c.pr < 16700.0, "Pr outside Sieder-Tate laminar range 0.48..16700");
     rc.require(c.mu_ratio > 0.0044 && c.mu_ratio < 9.75,
                "mu/mu_s outside Sieder-Tate laminar range 0.0044..9.75");
     rc.require(c.wall == TH_WALL_T, "Sieder-Tate laminar is for uniform wall temperature");
     const double nu = 1.86 * std::cbrt(c.re * c.pr / c.l_over_d) * std::pow(c.mu_ratio, 0.14);
-    rc.require(nu >= nu_circle_t, "Sieder-Tate laminar below the developed value 3.66 (tube too long for it)");
+    rc.require(nu >= laminar_detail::nu_circle_t,
+               "Sieder-Tate laminar below the developed value 3.66 (tube too long for it)");
     return nu;
 }
 
-double nu_shah(const th_conditions &c, range_check &rc) {
+template <class Range>
+inline double nu_shah(const th_conditions &c, Range &rc) {
     // Shah (1975) fits of the exact thermal-entry solution, as given by
     // Shah & London (1978) (coefficients from memory, checked against the
     // exact series in the tests).
-    laminar_regime(c, rc);
+    laminar_detail::laminar_regime(c, rc);
     rc.require(c.entry == TH_ENTRY_THERMAL, "Shah fits are for thermal entry (velocity developed)");
-    if (std::isinf(c.l_over_d)) return c.wall == TH_WALL_T ? nu_circle_t : nu_circle_h;
-    const double xs = x_star(c);
+    if (std::isinf(c.l_over_d))
+        return c.wall == TH_WALL_T ? laminar_detail::nu_circle_t : laminar_detail::nu_circle_h;
+    const double xs = laminar_detail::x_star(c);
     const double cr = std::cbrt(xs);
     if (c.wall == TH_WALL_T) {
         if (c.averaging == TH_LOCAL) {
@@ -92,12 +104,13 @@ double nu_shah(const th_conditions &c, range_check &rc) {
     return 4.364 + 0.0722 / xs;
 }
 
-double nu_gnielinski_laminar_at(const th_conditions &c, double re, range_check &rc) {
+template <class Range>
+inline double nu_gnielinski_laminar_at(const th_conditions &c, double re, Range &rc) {
     // Gnielinski's mean-value composites (VDI Heat Atlas, G1; from memory,
     // checked against the exact and numerical solutions in the tests).
     // Thermal entry keeps the first three terms; combined entry adds the
     // developing-velocity term.
-    need_mean(c);
+    laminar_detail::need_mean(c);
     rc.require(c.pr >= 0.1 && c.pr <= 1000.0, "Pr outside Gnielinski laminar range 0.1..1000");
     const double z = std::isinf(c.l_over_d) ? 0.0 : re * c.pr / c.l_over_d;
     const bool combined = c.entry == TH_ENTRY_COMBINED;
@@ -117,9 +130,12 @@ double nu_gnielinski_laminar_at(const th_conditions &c, double re, range_check &
     return std::cbrt(sum);
 }
 
-double nu_gnielinski_laminar(const th_conditions &c, range_check &rc) {
-    laminar_regime(c, rc);
+template <class Range>
+inline double nu_gnielinski_laminar(const th_conditions &c, Range &rc) {
+    laminar_detail::laminar_regime(c, rc);
     return nu_gnielinski_laminar_at(c, c.re, rc);
 }
 
 }  // namespace th
+
+#endif
