@@ -208,6 +208,24 @@ inline void check_text(const char *fn, const char *text, const char *what) {
     if (strnlen(text, 4096) >= 4096) violation(fn, "static text not terminated within 4096 bytes");
 }
 
+// A byte copy of an input passed by const pointer, taken before the call;
+// unchanged() after it proves the function left the input alone.
+template <class T>
+class snapshot {
+  public:
+    explicit snapshot(const T &v) : v_(&v) {
+        std::memcpy(static_cast<void *>(&copy_), static_cast<const void *>(&v), sizeof(T));
+    }
+    bool unchanged() const { return std::memcmp(static_cast<const void *>(&copy_), v_, sizeof(T)) == 0; }
+    void check_const(const char *fn) const {
+        if (!unchanged()) violation(fn, "modified its const input");
+    }
+
+  private:
+    T copy_;
+    const T *v_;
+};
+
 // ---- known open issues ------------------------------------------------------
 // Bugs found by the fuzzer in code owned by others, reported and not fixed
 // yet. With skip_known_issues set (the fuzz harness sets it unless
@@ -643,8 +661,7 @@ inline void call_th_nusselt(source &s, outcome &o) {
     const int method = s.choice(TH_NU_METHOD_COUNT);
     th_conditions c;
     draw_conditions(s, c);
-    th_conditions before;
-    std::memcpy(static_cast<void *>(&before), static_cast<const void *>(&c), sizeof c);
+    const snapshot<th_conditions> before(c);
     const bool null_conditions = s.null_pointer();
     out_slot<th_nusselt_result> r(s);
     if (method == TH_NU_COMBINED_ENTRY_NUMERIC && known_issue_combined_entry_pr(c.pr)) {
@@ -652,8 +669,7 @@ inline void call_th_nusselt(source &s, outcome &o) {
         return;
     }
     const int st = th_nusselt(method, null_conditions ? nullptr : &c, r.ptr());
-    if (std::memcmp(static_cast<const void *>(&before), static_cast<const void *>(&c), sizeof c) != 0)
-        violation("th_nusselt", "modified its const th_conditions input");
+    before.check_const("th_nusselt");
     if (!settle("th_nusselt", st, o, r)) return;
     if (null_conditions) violation("th_nusselt", "success with NULL conditions");
     record("th_nusselt", o, st, method, r);
@@ -749,6 +765,7 @@ inline void call_th_nusselt_array(source &s, outcome &o) {
     const int n = draw_row_count(s);
     th_conditions shared;
     draw_conditions(s, shared);
+    const snapshot<th_conditions> before(shared);
     const bool null_shared = s.null_pointer();
     const array_in re(s, n, kind::reynolds);
     const array_in pr(s, n, kind::prandtl);
@@ -764,6 +781,7 @@ inline void call_th_nusselt_array(source &s, outcome &o) {
                                     static_cast<std::size_t>(n), re.ptr(), pr.ptr(), ld.ptr(),
                                     nu.is_null() ? nullptr : *nu.ptr(),
                                     status.is_null() ? nullptr : *status.ptr());
+    before.check_const("th_nusselt_array");
     const bool bad_call = method < 0 || method >= TH_NU_METHOD_COUNT || null_shared ||
                           (n > 0 && (re.null || pr.null || nu.is_null() || status.is_null()));
     check_rows("th_nusselt_array", st, n, bad_call, nu, status, o, [&](int i, double *one) {
@@ -944,22 +962,6 @@ inline void call_th_annulus_laminar(source &s, outcome &o) {
 }
 
 // ---- whole-tube solve ---------------------------------------------------------------
-// The tube functions are declared weak: the harness still builds while the
-// section is being implemented, and skips (status -2 in the outcome) what
-// the library does not export yet. run_fuzz.sh / run_tsan.sh list them.
-#pragma weak th_tube_case_init
-#pragma weak th_tube_case_set
-#pragma weak th_fluid_constant
-#pragma weak th_fluid_props_at
-#pragma weak th_tube_solve
-#pragma weak th_tube_profile
-#pragma weak th_tube_length_for_outlet
-#pragma weak th_tube_flow_for_outlet
-#pragma weak th_tube_flow_for_duty
-#pragma weak th_tube_report
-#pragma weak th_tube_result_value
-
-constexpr int not_in_library = -2;
 
 // Fill a th_fluid: water, air or a user table (structured, i.e. increasing
 // temperatures, or arbitrary).
@@ -1021,8 +1023,12 @@ inline bool draw_tube_case(source &s, th_tube_case &c) {
     return true;
 }
 
-inline bool same_bytes(const void *a, const void *b, std::size_t n) {
-    return std::memcmp(a, b, n) == 0;
+// The same for a call reporting in `o`: false, with the outcome marked as a
+// skipped known issue, when the draw hit one.
+inline bool draw_tube_case(source &s, th_tube_case &c, outcome &o) {
+    if (draw_tube_case(s, c)) return true;
+    o.status = skipped_known_issue;
+    return false;
 }
 
 inline void record(const char *fn, outcome &o, int st, const th_tube_result &r) {
@@ -1061,10 +1067,6 @@ inline void record(const char *fn, outcome &o, int st, const out_slot<th_tube_re
 }
 
 inline void call_th_tube_case_init(source &s, outcome &o) {
-    if (!&th_tube_case_init) {
-        o.status = not_in_library;
-        return;
-    }
     out_slot<th_tube_case> c(s);
     const int st = th_tube_case_init(c.ptr());
     if (!settle("th_tube_case_init", st, o, c) || c.is_null()) return;
@@ -1083,15 +1085,8 @@ inline void call_th_tube_case_init(source &s, outcome &o) {
 // solving, so they are copied as given). The case is then solved, which
 // drives the solver through the flat-argument path.
 inline void call_th_tube_case_set(source &s, outcome &o) {
-    if (!&th_tube_case_set || !&th_tube_case_init || !&th_tube_solve) {
-        o.status = not_in_library;
-        return;
-    }
     th_tube_case c;
-    if (!draw_tube_case(s, c)) {
-        o.status = skipped_known_issue;
-        return;
-    }
+    if (!draw_tube_case(s, c, o)) return;
     const int fluid = s.choice(3);
     const int shape = s.choice(4);
     const double size1 = s.real(kind::diameter);
@@ -1099,14 +1094,13 @@ inline void call_th_tube_case_set(source &s, outcome &o) {
     const int wall_kind = s.choice(3);
     const double value = s.real(kind::t_surround);
     const bool null_case = s.null_pointer();
-    th_tube_case before;
-    std::memcpy(static_cast<void *>(&before), static_cast<const void *>(&c), sizeof before);
+    const snapshot<th_tube_case> before(c);
     const int st = th_tube_case_set(null_case ? nullptr : &c, fluid, shape, size1, size2, wall_kind,
                                     value);
     o.status = st;
     if (!status_is_defined(st)) violation("th_tube_case_set", "returned an undefined status code");
     if (TH_FAILED(st)) {
-        if (!same_bytes(&before, &c, sizeof c))
+        if (!before.unchanged())
             violation("th_tube_case_set", "the case was modified although an error was returned");
         return;
     }
@@ -1125,10 +1119,6 @@ inline void call_th_tube_case_set(source &s, outcome &o) {
 }
 
 inline void call_th_fluid_constant(source &s, outcome &o) {
-    if (!&th_fluid_constant) {
-        o.status = not_in_library;
-        return;
-    }
     static const kind k[] = {kind::density, kind::cp, kind::viscosity, kind::conductivity};
     const reals<4> a(s, k);
     const int gas = s.choice(2);
@@ -1144,14 +1134,9 @@ inline void call_th_fluid_constant(source &s, outcome &o) {
 }
 
 inline void call_th_fluid_props_at(source &s, outcome &o) {
-    if (!&th_fluid_props_at) {
-        o.status = not_in_library;
-        return;
-    }
     th_fluid f;
     draw_fluid(s, f);
-    th_fluid before;
-    std::memcpy(static_cast<void *>(&before), static_cast<const void *>(&f), sizeof before);
+    const snapshot<th_fluid> before(f);
     const double t = s.real(kind::t_water);
     const double p = s.real(kind::pressure);
     const bool null_fluid = s.null_pointer();
@@ -1161,28 +1146,20 @@ inline void call_th_fluid_props_at(source &s, outcome &o) {
         return;
     }
     const int st = th_fluid_props_at(null_fluid ? nullptr : &f, t, p, out.ptr());
-    if (!same_bytes(&before, &f, sizeof f)) violation("th_fluid_props_at", "modified its const input");
+    before.check_const("th_fluid_props_at");
     if (!settle("th_fluid_props_at", st, o, out)) return;
     if (null_fluid) violation("th_fluid_props_at", "success with a NULL fluid");
     record("th_fluid_props_at", o, st, out);
 }
 
 inline void call_th_tube_solve(source &s, outcome &o) {
-    if (!&th_tube_solve || !&th_tube_case_init) {
-        o.status = not_in_library;
-        return;
-    }
     th_tube_case c;
-    if (!draw_tube_case(s, c)) {
-        o.status = skipped_known_issue;
-        return;
-    }
-    th_tube_case before;
-    std::memcpy(static_cast<void *>(&before), static_cast<const void *>(&c), sizeof before);
+    if (!draw_tube_case(s, c, o)) return;
+    const snapshot<th_tube_case> before(c);
     const bool null_case = s.null_pointer();
     out_slot<th_tube_result> r(s);
     const int st = th_tube_solve(null_case ? nullptr : &c, r.ptr());
-    if (!same_bytes(&before, &c, sizeof c)) violation("th_tube_solve", "modified its const input");
+    before.check_const("th_tube_solve");
     if (!settle("th_tube_solve", st, o, r)) return;
     if (null_case) violation("th_tube_solve", "success with a NULL case");
     record("th_tube_solve", o, st, r);
@@ -1228,24 +1205,16 @@ class profile_array {
 };
 
 inline void call_th_tube_profile(source &s, outcome &o) {
-    if (!&th_tube_profile || !&th_tube_case_init) {
-        o.status = not_in_library;
-        return;
-    }
     th_tube_case c;
-    if (!draw_tube_case(s, c)) {
-        o.status = skipped_known_issue;
-        return;
-    }
-    th_tube_case before;
-    std::memcpy(static_cast<void *>(&before), static_cast<const void *>(&c), sizeof before);
+    if (!draw_tube_case(s, c, o)) return;
+    const snapshot<th_tube_case> before(c);
     const int n_points = s.choice(40, 11);
     const bool null_case = s.null_pointer();
     profile_array x(s, n_points), tb(s, n_points), tw(s, n_points), h(s, n_points);
     out_slot<th_tube_result> summary(s, true);
     const int st = th_tube_profile(null_case ? nullptr : &c, n_points, x.ptr(), tb.ptr(), tw.ptr(),
                                    h.ptr(), summary.ptr());
-    if (!same_bytes(&before, &c, sizeof c)) violation("th_tube_profile", "modified its const input");
+    before.check_const("th_tube_profile");
     if (!settle("th_tube_profile", st, o, x, tb, tw, h, summary)) return;
     if (null_case) violation("th_tube_profile", "success with a NULL case");
     if (n_points < 2 || n_points > TH_TUBE_SEGMENTS_MAX + 1)
@@ -1262,23 +1231,15 @@ using tube_inverse_fn = int (*)(const th_tube_case *, double, double *, th_tube_
 
 inline void call_tube_inverse(const char *fn, tube_inverse_fn f, kind target_kind, source &s,
                               outcome &o) {
-    if (!f || !&th_tube_case_init) {
-        o.status = not_in_library;
-        return;
-    }
     th_tube_case c;
-    if (!draw_tube_case(s, c)) {
-        o.status = skipped_known_issue;
-        return;
-    }
-    th_tube_case before;
-    std::memcpy(static_cast<void *>(&before), static_cast<const void *>(&c), sizeof before);
+    if (!draw_tube_case(s, c, o)) return;
+    const snapshot<th_tube_case> before(c);
     const double target = s.real(target_kind);
     const bool null_case = s.null_pointer();
     out_slot<double> answer(s);
     out_slot<th_tube_result> r(s, true);
     const int st = f(null_case ? nullptr : &c, target, answer.ptr(), r.ptr());
-    if (!same_bytes(&before, &c, sizeof c)) violation(fn, "modified its const input");
+    before.check_const(fn);
     if (!settle(fn, st, o, answer, r)) return;
     if (null_case) violation(fn, "success with a NULL case");
     record(fn, o, answer);
@@ -1330,20 +1291,15 @@ inline int draw_tube_result(source &s, th_tube_result &r) {
 }
 
 inline void call_th_tube_report(source &s, outcome &o) {
-    if (!&th_tube_report || !&th_tube_solve || !&th_tube_case_init) {
-        o.status = not_in_library;
-        return;
-    }
     th_tube_result r;
     const int status = draw_tube_result(s, r);
-    th_tube_result before;
-    std::memcpy(static_cast<void *>(&before), static_cast<const void *>(&r), sizeof before);
+    const snapshot<th_tube_result> before(r);
     const bool null_result = s.null_pointer();
     out_slot<th_tube_report_row[TH_TUBE_REPORT_ROWS]> rows(s);
     out_slot<int> n_rows(s);
     const int st = th_tube_report(null_result ? nullptr : &r, status, rows.ptr() ? *rows.ptr() : nullptr,
                                   n_rows.ptr());
-    if (!same_bytes(&before, &r, sizeof r)) violation("th_tube_report", "modified its const input");
+    before.check_const("th_tube_report");
     if (!settle("th_tube_report", st, o, rows, n_rows)) return;
     if (null_result) violation("th_tube_report", "success with a NULL result");
     const int n = n_rows.value();
@@ -1362,19 +1318,14 @@ inline void call_th_tube_report(source &s, outcome &o) {
 }
 
 inline void call_th_tube_result_value(source &s, outcome &o) {
-    if (!&th_tube_result_value || !&th_tube_solve || !&th_tube_case_init) {
-        o.status = not_in_library;
-        return;
-    }
     th_tube_result r;
     draw_tube_result(s, r);
-    th_tube_result before;
-    std::memcpy(static_cast<void *>(&before), static_cast<const void *>(&r), sizeof before);
+    const snapshot<th_tube_result> before(r);
     const int which = s.choice(TH_TUBE_OUT_COUNT);
     const bool null_result = s.null_pointer();
     out_slot<double> v(s);
     const int st = th_tube_result_value(null_result ? nullptr : &r, which, v.ptr());
-    if (!same_bytes(&before, &r, sizeof r)) violation("th_tube_result_value", "modified its const input");
+    before.check_const("th_tube_result_value");
     if (!settle("th_tube_result_value", st, o, v)) return;
     if (null_result) violation("th_tube_result_value", "success with a NULL result");
     record("th_tube_result_value", o, v);
