@@ -25,6 +25,20 @@ class Report:
         if not ok:
             self.failures.append(what)
 
+    def finish(self, stage: str, timings: dict, details=()) -> int:
+        """Prints the failures, the tally (with `details` lines under it) and
+        the stage's timings; returns the exit status of a test runner."""
+        for f in self.failures:
+            print("FAIL:", f)
+        print(f"{self.checks - len(self.failures)} of {self.checks} checks passed")
+        for line in details:
+            print(line)
+        print(f"{stage} timings:")
+        width = max((len(k) for k in timings), default=0)
+        for k, v in timings.items():
+            print(f"  {k:{width}s} {v:6.2f} s")
+        return 1 if self.failures else 0
+
     def record(self, check: str, source: str, deviation: float, tolerance: float):
         if self.log:
             with open(self.log, "a", encoding="utf-8") as fh:

@@ -386,14 +386,9 @@ def main() -> int:
         timings["save, edit, reload round trip"] = time.monotonic() - t0
         timings["install the .oxt"] = calc.timings.get("install", 0.0)
     timings["total (incl. workbook generation and checks)"] = time.monotonic() - t_start
-    for f in rep.failures:
-        print("FAIL:", f)
-    print(f"{rep.checks - len(rep.failures)} of {rep.checks} checks passed "
-          f"({len(VALUE_CASES)} value cases, {len(ARRAY_CASES)} array, {len(BAD_CASES)} bad-input)")
-    print("Calc stage timings:")
-    for k, v in timings.items():
-        print(f"  {k:48s} {v:6.2f} s")
-    return 1 if rep.failures else 0
+    return rep.finish("Calc stage", timings,
+                      [f"  ({len(VALUE_CASES)} value cases, {len(ARRAY_CASES)} array, "
+                       f"{len(BAD_CASES)} bad-input)"])
 
 
 if __name__ == "__main__":

@@ -420,13 +420,7 @@ def main() -> int:
               f"subnormal ({len(odd)}):")
         for w in odd[:30]:
             print("  ", w)
-    for f in rep.failures:
-        print("FAIL:", f)
-    print(f"{rep.checks - len(rep.failures)} of {rep.checks} checks passed")
-    print("Calc robustness stage timings:")
-    for k, v in timings.items():
-        print(f"  {k:44s} {v:6.2f} s")
-    return 1 if rep.failures else 0
+    return rep.finish("Calc robustness stage", timings)
 
 
 if __name__ == "__main__":

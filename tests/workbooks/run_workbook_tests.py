@@ -190,15 +190,8 @@ def main() -> int:
     timings["compare with the library"] = time.monotonic() - t0
     timings["total"] = time.monotonic() - t_start
 
-    for f in rep.failures:
-        print("FAIL:", f)
-    print(f"{rep.checks - len(rep.failures)} of {rep.checks} checks passed")
-    for stem, n in counts.items():
-        print(f"  {stem:22s} {n:4d} key results compared")
-    print("Template workbook stage timings:")
-    for k, v in timings.items():
-        print(f"  {k:40s} {v:6.2f} s")
-    return 1 if rep.failures else 0
+    return rep.finish("Template workbook stage", timings,
+                      [f"  {stem:22s} {n:4d} key results compared" for stem, n in counts.items()])
 
 
 if __name__ == "__main__":
