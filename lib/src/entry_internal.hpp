@@ -29,6 +29,18 @@ double thermal_entry_nu(double x_star, int wall, int averaging);
 // boundary-layer solution, cached per (Pr, wall).
 double combined_entry_nu(double x_star, double pr, int wall, int averaging);
 
+// The Prandtl range over which the combined-entry solution is validated
+// (tests/unit/test_entry_combined.cpp); outside it a warning. Above it the
+// thermal-entry series is the solution's own limit (the automatic choice
+// uses it there).
+constexpr double combined_entry_pr_min = 0.5;
+constexpr double combined_entry_pr_max = 1e4;
+template <class Range>
+void require_combined_entry_pr(double pr, Range &rc) {
+    rc.require(pr >= combined_entry_pr_min && pr <= combined_entry_pr_max,
+               "combined entry: Pr outside 0.5 .. 1e4 (validated range)");
+}
+
 // Apparent Darcy friction factor times Re, (f_app Re), for the
 // hydrodynamic entry from a uniform inlet velocity: the pressure drop from
 // the inlet to x is dp = f_app (x/D) rho u_m^2 / 2.  x_plus = x/(D Re) > 0,

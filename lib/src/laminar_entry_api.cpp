@@ -9,10 +9,13 @@
 
 namespace {
 
-// Combined-entry validity: the Prandtl range covered by the checks in
-// tests/unit/test_entry_combined.cpp, and the first marched station.
-constexpr double combined_pr_min = 0.5;
-constexpr double combined_pr_max = 1e4;
+// Combined-entry validity: the Prandtl range, and the first marched station.
+template <class Range>
+void require_combined_entry_range(double pr, double x_star, Range &rc) {
+    th::require_combined_entry_pr(pr, rc);
+    rc.require(x_star >= th::entry::combined_entry_x_star_min(),
+               "combined entry: x* below 1e-7 (extrapolated)");
+}
 
 }  // namespace
 
@@ -33,10 +36,7 @@ int th_combined_entry_nusselt(double x_star, double pr, int wall, int averaging,
         th::need_out(nu);
         const double v = th::combined_entry_nu(x_star, pr, wall, averaging);
         th::range_check rc;
-        rc.require(pr >= combined_pr_min && pr <= combined_pr_max,
-                   "combined entry: Pr outside 0.5 .. 1e4 (validated range)");
-        rc.require(x_star >= th::entry::combined_entry_x_star_min(),
-                   "combined entry: x* below 1e-7 (extrapolated)");
+        require_combined_entry_range(pr, x_star, rc);
         *nu = th::checked(v);
         return rc.status();
     });
@@ -50,10 +50,7 @@ int th_entry_march_study(int entry, double x_star, double pr, int wall, int aver
         const double v = th::entry::entry_march_uncached(entry == TH_ENTRY_THERMAL, x_star, pr,
                                                         wall, averaging, cells, growth);
         th::range_check rc;
-        rc.require(pr >= combined_pr_min && pr <= combined_pr_max,
-                   "combined entry: Pr outside 0.5 .. 1e4 (validated range)");
-        rc.require(x_star >= th::entry::combined_entry_x_star_min(),
-                   "combined entry: x* below 1e-7 (extrapolated)");
+        require_combined_entry_range(pr, x_star, rc);
         *nu = th::checked(v);
         return rc.status();
     });

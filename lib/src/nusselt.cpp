@@ -151,7 +151,7 @@ double laminar_developed(const th_conditions &c, Range &rc) {
 template <class Range>
 double graetz_exact(const th_conditions &c, Range &rc) {
     rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
-    rc.require(c.entry == TH_ENTRY_THERMAL || c.pr > 1e4,
+    rc.require(c.entry == TH_ENTRY_THERMAL || c.pr > combined_entry_pr_max,
                "exact series is for thermal entry (velocity developed); combined entry requested");
     const double xs = std::isinf(c.l_over_d) ? c.l_over_d : c.l_over_d / (c.re * c.pr);
     return thermal_entry_nu(xs, c.wall, c.averaging);
@@ -162,7 +162,7 @@ double combined_entry(const th_conditions &c, Range &rc) {
     rc.require(c.re < TH_RE_LAMINAR_MAX, "Re >= 2300: laminar method applied outside laminar flow");
     rc.require(c.entry == TH_ENTRY_COMBINED, "combined-entry solution requested for a thermal-entry case");
     const double xs = std::isinf(c.l_over_d) ? c.l_over_d : c.l_over_d / (c.re * c.pr);
-    rc.require(c.pr >= 0.5 && c.pr <= 1e4, "Pr outside the validated range 0.5..1e4 of the combined-entry solution");
+    require_combined_entry_pr(c.pr, rc);
     return combined_entry_nu(xs, c.pr, c.wall, c.averaging);
 }
 
@@ -225,12 +225,12 @@ evaluation choose(const th_conditions &c) {
             e.method = TH_NU_GRAETZ_EXACT;
             e.reason = "laminar thermal entry (velocity developed): exact series";
         } else {
-            if (c.pr > 1e4) {
+            if (c.pr > combined_entry_pr_max) {
                 // The velocity develops Pr times faster than the temperature:
                 // the thermal-entry solution is the combined one's limit.
                 e.method = TH_NU_GRAETZ_EXACT;
                 e.reason = "laminar combined entry at Pr > 1e4: thermal-entry exact series (its large-Pr limit)";
-            } else if (c.pr >= 0.5) {
+            } else if (c.pr >= combined_entry_pr_min) {
                 e.method = TH_NU_COMBINED_ENTRY_NUMERIC;
                 e.reason = "laminar combined entry: numerical boundary-layer solution";
             } else if (c.averaging == TH_MEAN) {
