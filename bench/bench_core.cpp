@@ -140,9 +140,12 @@ BENCHMARK_CAPTURE(run_nusselt, nusselt_auto/api, TH_NU_AUTO, rows::turbulent);
 TH_F_BENCH(haaland, run_inline_f, haaland_inline, TH_F_HAALAND);
 TH_F_BENCH(swamee_jain, run_inline_f, swamee_jain_inline, TH_F_SWAMEE_JAIN);
 TH_F_BENCH(churchill, run_inline_f, churchill_inline, TH_F_CHURCHILL);
+BENCHMARK_CAPTURE(run_inline_f, churchill/inline_pow, churchill_pow_inline);
 TH_F_BENCH(petukhov_f, run_inline_f, petukhov_friction_inline, TH_F_PETUKHOV);
 TH_F_BENCH(laminar_f, run_inline_f_laminar, laminar_friction_inline, TH_F_LAMINAR);
-// Colebrook: the exact solution against the iteration a spreadsheet needs.
+// Colebrook: the exact solution inline (the baseline), and the iteration a
+// spreadsheet would otherwise need.
+BENCHMARK_CAPTURE(run_inline_f, colebrook/inline_lambert_w, colebrook_lambert_w_inline);
 BENCHMARK_CAPTURE(run_inline_f, colebrook/inline_iteration, colebrook_iterative);
 BENCHMARK_CAPTURE(run_friction, colebrook/api_lambert_w, TH_F_COLEBROOK);
 BENCHMARK_CAPTURE(run_friction_array, colebrook/api_array, TH_F_COLEBROOK);

@@ -138,6 +138,7 @@ NU_PAIR(gnielinski_laminar, gnielinski_laminar_inline, TH_NU_GNIELINSKI_LAMINAR,
 F_PAIR(haaland, haaland_inline, TH_F_HAALAND)
 F_PAIR(swamee_jain, swamee_jain_inline, TH_F_SWAMEE_JAIN)
 F_PAIR(churchill, churchill_inline, TH_F_CHURCHILL)
+F_PAIR(colebrook, colebrook_lambert_w_inline, TH_F_COLEBROOK)
 F_PAIR(petukhov_f, petukhov_friction_inline, TH_F_PETUKHOV)
 F_PAIR(laminar_f, laminar_friction_inline, TH_F_LAMINAR)
 
@@ -156,6 +157,7 @@ int main() {
     run_haaland();
     run_swamee_jain();
     run_churchill();
+    run_colebrook();
     run_petukhov_f();
     run_laminar_f();
     std::printf("%d calls (rows) per variant\n", n_rows);

@@ -151,14 +151,16 @@ double friction_checked_of(double re, double rr, Range &rc) {
     return positive_result(friction_of<M>(re, rr, rc));
 }
 
-// Method M for every row of th_friction_factor_array: the row inputs in a
-// first pass over the column, then only the rows that passed are computed.
+// Method M for every row of th_friction_factor_array: the roughness was
+// checked once (shared_status); per row only its Re, read before the row's
+// result is written (in place).
 template <int M>
 int friction_rows(std::size_t n, const double *re, double rr, int shared_status, double *f, int *status) {
-    for (std::size_t i = 0; i < n; ++i) status[i] = positive_finite(re[i]) ? shared_status : TH_ERR_INPUT;
+    if (shared_status != TH_OK)
+        return for_each_row(n, f, status, [&](std::size_t, double &) { return shared_status; });
     return for_each_row(n, f, status, [&](std::size_t i, double &value) {
-        if (status[i] != TH_OK) return status[i];
         const double re_i = re[i];
+        if (!positive_finite(re_i)) return int{TH_ERR_INPUT};
         return guard([&] {
             range_flag rc;
             value = friction_checked_of<M>(re_i, rr, rc);

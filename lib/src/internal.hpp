@@ -8,6 +8,8 @@
 #include <boost/math/policies/error_handling.hpp>
 
 #include <cmath>
+#include <cstdint>
+#include <cstring>
 #include <exception>
 #include <limits>
 #include <new>
@@ -58,16 +60,25 @@ inline void need_out(T *p) {
     if (p == nullptr) fail(TH_ERR_INPUT);
 }
 inline bool finite(double x) { return std::isfinite(x); }
-inline void need_positive(double x) { need(finite(x) && x > 0.0); }
+// Finite and > 0, in one unsigned comparison of the bit pattern: the
+// positive finite doubles are exactly the patterns 1 .. 0x7FEF...F (+0 wraps
+// to the top, negatives, infinities and NaNs lie above). The hottest check
+// in the library (Re and Pr of every call and row); written so, it is three
+// instructions and one branch instead of two floating-point comparisons.
+inline bool positive_finite(double x) {
+    std::uint64_t bits;
+    std::memcpy(&bits, &x, sizeof bits);
+    return bits - 1u < 0x7FEFFFFFFFFFFFFFu;
+}
+inline void need_positive(double x) { need(positive_finite(x)); }
 inline void need_nonnegative(double x) { need(finite(x) && x >= 0.0); }
 inline void need_finite(double x) { need(finite(x)); }
 // Positive, or +infinity (used for "fully developed" lengths).
 inline void need_positive_or_inf(double x) { need(!std::isnan(x) && x > 0.0); }
 inline void need_temperature(double t) { need(finite(t) && t > 0.0); }
 
-// The same tests as plain expressions (nothing thrown), for the first pass
-// of the *_array functions over their input columns.
-inline bool positive_finite(double x) { return x > 0.0 && x <= std::numeric_limits<double>::max(); }
+// The same tests as plain expressions (nothing thrown), for the row
+// checks of the *_array functions.
 inline bool positive_or_inf(double x) { return x > 0.0; }  // false for NaN
 
 // A result about to be written with a success code must be finite. Inputs
@@ -105,7 +116,8 @@ class range_check {
 // the first note (see rows.hpp).
 class range_flag {
   public:
-    void require(bool within, const char * /*note*/) { ok_ = ok_ && within; }
+    // `&`, not `&&`: no branch per limit, only the flag.
+    void require(bool within, const char * /*note*/) { ok_ = ok_ & within; }
     bool ok() const { return ok_; }
     int status() const { return ok_ ? TH_OK : TH_WARN_RANGE; }
 

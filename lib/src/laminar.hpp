@@ -104,36 +104,43 @@ inline double nu_shah(const th_conditions &c, Range &rc) {
     return 4.364 + 0.0722 / xs;
 }
 
-template <class Range>
-inline double nu_gnielinski_laminar_at(const th_conditions &c, double re, Range &rc) {
-    // Gnielinski's mean-value composites (VDI Heat Atlas, G1; from memory,
-    // checked against the exact and numerical solutions in the tests).
-    // Thermal entry keeps the first three terms; combined entry adds the
-    // developing-velocity term.
-    laminar_detail::need_mean(c);
-    rc.require(c.pr >= 0.1 && c.pr <= 1000.0, "Pr outside Gnielinski laminar range 0.1..1000");
-    const double z = std::isinf(c.l_over_d) ? 0.0 : re * c.pr / c.l_over_d;
-    const bool combined = c.entry == TH_ENTRY_COMBINED;
+namespace laminar_detail {
+
+// Gnielinski's mean-value composites (VDI Heat Atlas, G1; from memory,
+// checked against the exact and numerical solutions in the tests), from
+// z = Re Pr D/L, its cube root and Re D/L. The roots come in as arguments
+// because the 2013 transition form builds them from cube roots it needs
+// anyway (turbulent.hpp). Thermal entry keeps the first three terms;
+// combined entry adds the developing-velocity term.
+inline double gnielinski_composite(const th_conditions &c, double z, double cbrt_z, double red) {
     // Cubes by multiplication: pow(x, 3) costs a general pow call.
     const auto cube = [](double x) { return x * x * x; };
+    const bool combined = c.entry == TH_ENTRY_COMBINED;
     double sum;
     if (c.wall == TH_WALL_T) {
-        sum = cube(3.66) + cube(0.7) + cube(1.615 * std::cbrt(z) - 0.7);
-        if (combined) sum += cube(std::pow(2.0 / (1.0 + 22.0 * c.pr), 1.0 / 6.0) * std::sqrt(z));
+        sum = cube(3.66) + cube(0.7) + cube(1.615 * cbrt_z - 0.7);
+        // The term is [(2/(1 + 22 Pr))^(1/6) z^(1/2)]^3, taken as
+        // z (2 z/(1 + 22 Pr))^(1/2): one sqrt instead of a pow and a sqrt.
+        if (combined) sum += z * std::sqrt(2.0 * z / (1.0 + 22.0 * c.pr));
     } else {
-        sum = cube(4.354) + cube(0.6) + cube(1.953 * std::cbrt(z) - 0.6);
-        if (combined) {
-            const double red = std::isinf(c.l_over_d) ? 0.0 : re / c.l_over_d;
-            sum += cube(0.924 * std::cbrt(c.pr) * std::sqrt(red));
-        }
+        // [0.924 Pr^(1/3) (Re D/L)^(1/2)]^3 = 0.924^3 Pr (Re D/L)^(3/2).
+        sum = cube(4.354) + cube(0.6) + cube(1.953 * cbrt_z - 0.6);
+        if (combined) sum += cube(0.924) * c.pr * red * std::sqrt(red);
     }
     return std::cbrt(sum);
 }
 
+}  // namespace laminar_detail
+
 template <class Range>
 inline double nu_gnielinski_laminar(const th_conditions &c, Range &rc) {
     laminar_detail::laminar_regime(c, rc);
-    return nu_gnielinski_laminar_at(c, c.re, rc);
+    laminar_detail::need_mean(c);
+    rc.require(c.pr >= 0.1 && c.pr <= 1000.0, "Pr outside Gnielinski laminar range 0.1..1000");
+    const bool developed = std::isinf(c.l_over_d);
+    const double z = developed ? 0.0 : c.re * c.pr / c.l_over_d;
+    const double red = developed ? 0.0 : c.re / c.l_over_d;
+    return laminar_detail::gnielinski_composite(c, z, std::cbrt(z), red);
 }
 
 }  // namespace th

@@ -5,8 +5,10 @@
 #include "rows.hpp"
 #include "entry_internal.hpp"
 
+#include <array>
 #include <cmath>
 #include <limits>
+#include <utility>
 #include <type_traits>
 
 namespace th {
@@ -132,7 +134,6 @@ void validate(const th_conditions &c) {
 }
 
 struct evaluation {
-    double f = 0.0;
     int method = TH_NU_AUTO;
     const char *reason = "chosen by caller";
 };
@@ -200,14 +201,6 @@ decltype(auto) with_method(int method, Visit &&visit) {
     return with_id<TH_NU_AUTO + 1, TH_NU_METHOD_COUNT>(method, std::forward<Visit>(visit));
 }
 
-// Validate what the method reads, then compute.
-double evaluate(int method, const th_conditions &c, range_check &rc, double &f) {
-    return with_method(method, [&](auto m) {
-        validate<fields_read(m.value)>(c);
-        return compute<m.value>(c, rc, f);
-    });
-}
-
 // The automatic choice: regime first, then Pr (liquid metals, very viscous
 // fluids), then the entry state and the wall condition. Each branch names
 // its reason in a static text that a spreadsheet cell can show.
@@ -263,6 +256,51 @@ evaluation choose(const th_conditions &c) {
     return e;
 }
 
+// ---- the single call -------------------------------------------------------
+// th_nusselt() checks its pointers, the method id and re, pr, l_over_d, then
+// calls the method's own function through a table indexed by the id: one
+// indirect call instead of a chain of id comparisons, and each function
+// carries only its method's checks and formula, compiled as straight-line code.
+using nusselt_fn = int (*)(const th_conditions &, th_nusselt_result &, const char *reason);
+
+const char *used_name(int method, const th_conditions &c) {
+    if (method == TH_NU_LIQUID_METAL)
+        return c.wall == TH_WALL_H ? "liquid metal (Skupinski)" : "liquid metal (Seban-Shimazaki)";
+    return display_name(method);
+}
+
+// Method M (not TH_NU_AUTO): the fields it reads, then Nu. *out is written
+// only once Nu has passed its check, so a failed call leaves it untouched.
+template <int M>
+int nusselt_method(const th_conditions &c, th_nusselt_result &out, const char *reason) {
+    validate<fields_read(M)>(c);
+    range_check rc;
+    double f = 0.0;
+    const double nu = positive_result(compute<M>(c, rc, f));
+    out.nu = nu;
+    out.method = M;
+    out.method_name = used_name(M, c);
+    out.reason = reason;
+    out.range_note = rc.note();
+    out.f = f;
+    return rc.status();
+}
+
+int nusselt_auto(const th_conditions &c, th_nusselt_result &out, const char *reason);
+
+template <std::size_t... I>
+constexpr std::array<nusselt_fn, sizeof...(I) + 1> nusselt_table(std::index_sequence<I...>) {
+    return {{nusselt_auto, &nusselt_method<static_cast<int>(I) + 1>...}};
+}
+constexpr auto nusselt_methods = nusselt_table(std::make_index_sequence<TH_NU_METHOD_COUNT - 1>{});
+
+// TH_NU_AUTO: what the choice reads, the choice, then the chosen method.
+int nusselt_auto(const th_conditions &c, th_nusselt_result &out, const char *) {
+    validate<fields_read(TH_NU_AUTO)>(c);
+    const evaluation e = choose(c);
+    return nusselt_methods[static_cast<std::size_t>(e.method)](c, out, e.reason);
+}
+
 // ---- the array form -------------------------------------------------------
 // The per-row columns of th_nusselt_array; l_over_d may be NULL (shared).
 struct row_columns {
@@ -288,28 +326,25 @@ int nusselt_rows_auto(const th_conditions &shared, std::size_t n, const row_colu
 }
 
 // Method M for every row. What th_nusselt checks on every call is split:
-// the shared fields once, the row inputs in a first pass over the columns, and
-// only the rows that passed are computed.
+// the shared fields once, and per row only its own Re, Pr (and L/D when
+// that is a column), read before the row's result is written (in place).
 template <int M>
 int nusselt_rows(const th_conditions &shared, std::size_t n, const row_columns &in, double *nu,
                  int *status) {
-    // When a shared field is bad every row fails, as th_nusselt fails each.
+    // When a shared field is bad every row fails, as th_nusselt fails each
+    // (a row whose own input is bad too says TH_ERR_INPUT either way).
     const int shared_status = guard([&] {
         validate<fields_read(M)>(shared);
         if (in.l_over_d == nullptr) need_positive_or_inf(shared.l_over_d);
         return TH_OK;
     });
-    for (std::size_t i = 0; i < n; ++i) {
-        const bool ok = positive_finite(in.re[i]) && positive_finite(in.pr[i]);
-        status[i] = ok ? shared_status : TH_ERR_INPUT;
-    }
-    if (in.l_over_d != nullptr)
-        for (std::size_t i = 0; i < n; ++i)
-            if (!positive_or_inf(in.l_over_d[i])) status[i] = TH_ERR_INPUT;
+    if (shared_status != TH_OK)
+        return for_each_row(n, nu, status, [&](std::size_t, double &) { return shared_status; });
     th_conditions c = shared;
     return for_each_row(n, nu, status, [&](std::size_t i, double &value) {
-        if (status[i] != TH_OK) return status[i];
         in.set(i, c);
+        // `&`: one branch for the row's checks.
+        if (!(positive_finite(c.re) & positive_finite(c.pr) & positive_or_inf(c.l_over_d))) return int{TH_ERR_INPUT};
         return guard([&] {
             range_flag rc;
             double f = 0.0;
@@ -317,12 +352,6 @@ int nusselt_rows(const th_conditions &shared, std::size_t n, const row_columns &
             return rc.status();
         });
     });
-}
-
-const char *used_name(int method, const th_conditions &c) {
-    if (method == TH_NU_LIQUID_METAL)
-        return c.wall == TH_WALL_H ? "liquid metal (Skupinski)" : "liquid metal (Seban-Shimazaki)";
-    return display_name(method);
 }
 
 }  // namespace
@@ -360,24 +389,7 @@ int th_nusselt(int method, const th_conditions *c, th_nusselt_result *out) {
         th::need(c != nullptr);
         if (method < 0 || method >= TH_NU_METHOD_COUNT) th::fail(TH_ERR_METHOD);
         th::validate_common(*c);
-        th::evaluation e;
-        if (method == TH_NU_AUTO) {
-            th::validate<th::fields_read(TH_NU_AUTO)>(*c);
-            e = th::choose(*c);
-        } else {
-            e.method = method;
-        }
-        th::range_check rc;
-        const double nu = th::checked(th::evaluate(e.method, *c, rc, e.f));
-        th::need(nu > 0.0);
-        // Written only now: a failed call leaves *out untouched.
-        out->nu = nu;
-        out->method = e.method;
-        out->method_name = th::used_name(e.method, *c);
-        out->reason = e.reason;
-        out->range_note = rc.note();
-        out->f = e.f;
-        return rc.status();
+        return th::nusselt_methods[static_cast<std::size_t>(method)](*c, *out, "chosen by caller");
     });
 }
 

@@ -16,6 +16,7 @@ namespace th {
 class row_statuses {
   public:
     void add(int status) {
+        if (status == TH_OK) return;  // most rows: one well-predicted branch
         if (TH_FAILED(status)) {
             if (first_error_ == TH_OK) first_error_ = status;
         } else if (status == TH_WARN_RANGE) {

@@ -83,20 +83,25 @@ inline double nu_petukhov(const th_conditions &c, Range &rc, double &f) {
     return f8 * c.re * c.pr / (1.07 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
 }
 
-template <class Range>
-inline double nu_gnielinski_at(const th_conditions &c, double re, Range &rc, double &f) {
-    f = turbulent_detail::friction_for(c, re);
+namespace turbulent_detail {
+
+// Gnielinski's form from the Darcy f, Re and Pr^(2/3).
+inline double gnielinski_core(double f, double re, double pr, double pr_2_3) {
     const double f8 = f / 8.0;
-    double nu = f8 * (re - 1000.0) * c.pr /
-                (1.0 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
-    // Entry-length factor (VDI Heat Atlas; from memory): mean over L
-    // 1 + (D/L)^(2/3); local at x 1 + (1/3)(D/x)^(2/3).
-    if (c.length_factor && std::isfinite(c.l_over_d)) {
-        const double g = std::pow(1.0 / c.l_over_d, 2.0 / 3.0);
-        nu *= c.averaging == TH_MEAN ? 1.0 + g : 1.0 + g / 3.0;
-    }
-    return nu * turbulent_detail::property_factor(c, rc);
+    return f8 * (re - 1000.0) * pr / (1.0 + 12.7 * std::sqrt(f8) * (pr_2_3 - 1.0));
 }
+
+// Entry-length factor (VDI Heat Atlas; from memory): mean over L
+// 1 + (D/L)^(2/3); local at x 1 + (1/3)(D/x)^(2/3). `d_over_l_2_3` is
+// called only when the factor applies (a finite length, not switched off).
+template <class Root>
+inline double length_factor(const th_conditions &c, Root d_over_l_2_3) {
+    if (!c.length_factor || !std::isfinite(c.l_over_d)) return 1.0;
+    const double g = d_over_l_2_3();
+    return c.averaging == TH_MEAN ? 1.0 + g : 1.0 + g / 3.0;
+}
+
+}  // namespace turbulent_detail
 
 template <class Range>
 inline double nu_gnielinski(const th_conditions &c, Range &rc, double &f) {
@@ -104,7 +109,10 @@ inline double nu_gnielinski(const th_conditions &c, Range &rc, double &f) {
     rc.require(c.re >= 3000.0, "Re below 3000 (Gnielinski range 3e3..5e6)");
     rc.require(c.re <= 5e6, "Re above 5e6 (Gnielinski range 3e3..5e6)");
     rc.require(c.pr >= 0.5 && c.pr <= 2000.0, "Pr outside Gnielinski range 0.5..2000");
-    return nu_gnielinski_at(c, c.re, rc, f);
+    f = turbulent_detail::friction_for(c, c.re);
+    const double nu = turbulent_detail::gnielinski_core(f, c.re, c.pr, std::pow(c.pr, 2.0 / 3.0));
+    const double k_l = turbulent_detail::length_factor(c, [&] { return std::pow(1.0 / c.l_over_d, 2.0 / 3.0); });
+    return nu * k_l * turbulent_detail::property_factor(c, rc);
 }
 
 template <class Range>
@@ -115,12 +123,21 @@ inline double nu_gnielinski_transition(const th_conditions &c, Range &rc, double
     rc.require(c.re >= TH_RE_LAMINAR_MAX && c.re <= TH_RE_TURBULENT_MIN,
                "Re outside the transition range 2300..1e4");
     rc.require(c.pr >= 0.5 && c.pr <= 2000.0, "Pr outside Gnielinski range 0.5..2000");
-    const double g = (c.re - TH_RE_LAMINAR_MAX) / (TH_RE_TURBULENT_MIN - TH_RE_LAMINAR_MAX);
-    range_check ignore;  // the end points are evaluated at their own Re
-    const double lam = nu_gnielinski_laminar_at(c, TH_RE_LAMINAR_MAX, ignore);
-    double f_turb = 0.0;
-    const double turb = nu_gnielinski_at(c, TH_RE_TURBULENT_MIN, rc, f_turb);
+    // The two ends need Pr^(1/3), (D/L)^(1/3) and their squares: two cube
+    // roots serve both (the laminar end's (Re Pr D/L)^(1/3), the turbulent
+    // end's Pr^(2/3) and (D/L)^(2/3)) instead of four pow/cbrt calls.
+    const double cbrt_pr = std::cbrt(c.pr);
+    const double cbrt_d_over_l = 1.0 / std::cbrt(c.l_over_d);  // 0 when developed
+    const double re_lam = TH_RE_LAMINAR_MAX, re_turb = TH_RE_TURBULENT_MIN;
+    const double z = re_lam * c.pr / c.l_over_d, red = re_lam / c.l_over_d;  // 0 when developed
+    const double lam =
+        laminar_detail::gnielinski_composite(c, z, std::cbrt(re_lam) * cbrt_pr * cbrt_d_over_l, red);
+    const double turb = turbulent_detail::gnielinski_core(turbulent_detail::friction_for(c, re_turb), re_turb,
+                                                          c.pr, cbrt_pr * cbrt_pr) *
+                        turbulent_detail::length_factor(c, [&] { return cbrt_d_over_l * cbrt_d_over_l; }) *
+                        turbulent_detail::property_factor(c, rc);
     f = turbulent_detail::friction_for(c, c.re);
+    const double g = (c.re - re_lam) / (re_turb - re_lam);
     return (1.0 - g) * lam + g * turb;
 }
 
