@@ -53,11 +53,7 @@ done
 
 # ---- library: instruction counts (deterministic) -----------------------------
 if command -v valgrind >/dev/null; then
-  c++ -std=c++17 -O2 -Wall -Wextra -I lib/include -I bench bench/calc/instr_count.cpp -L"$build/lib" \
-     -Wl,-rpath,"$PWD/$build/lib" -ltubeheat -o "$out/instr_count"
-  valgrind --tool=callgrind --callgrind-out-file="$out/callgrind.out" "$out/instr_count" \
-    >/dev/null 2>"$out/callgrind.log"
-  /usr/bin/python3 bench/calc/instr_table.py "$out/callgrind.out" >>"$report"
+  bench/calc/instructions.sh "$build" >>"$report"
 fi
 
 # ---- spreadsheet ------------------------------------------------------------------
