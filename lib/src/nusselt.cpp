@@ -343,8 +343,10 @@ int nusselt_rows(const th_conditions &shared, std::size_t n, const row_columns &
     th_conditions c = shared;
     return for_each_row(n, nu, status, [&](std::size_t i, double &value) {
         in.set(i, c);
-        // `&`: one branch for the row's checks.
-        if (!(positive_finite(c.re) & positive_finite(c.pr) & positive_or_inf(c.l_over_d))) return int{TH_ERR_INPUT};
+        // Combined with `&`, not `&&`: one branch for the row's checks.
+        const bool re_ok = positive_finite(c.re), pr_ok = positive_finite(c.pr);
+        const bool ld_ok = positive_or_inf(c.l_over_d);
+        if (!(re_ok & pr_ok & ld_ok)) return int{TH_ERR_INPUT};
         return guard([&] {
             range_flag rc;
             double f = 0.0;

@@ -136,7 +136,11 @@ inline double nu_gnielinski_transition(const th_conditions &c, Range &rc, double
                                                           c.pr, cbrt_pr * cbrt_pr) *
                         turbulent_detail::length_factor(c, [&] { return cbrt_d_over_l * cbrt_d_over_l; }) *
                         turbulent_detail::property_factor(c, rc);
-    f = turbulent_detail::friction_for(c, c.re);
+    // The f reported is the one Gnielinski's form would use at this Re. Nu
+    // does not depend on it, so it is checked on its own: at an absurd Re
+    // (a subnormal one, or Petukhov's pole near Re = 8) it is not finite,
+    // and the call fails as any other result out of range would.
+    f = positive_result(turbulent_detail::friction_for(c, c.re));
     const double g = (c.re - re_lam) / (re_turb - re_lam);
     return (1.0 - g) * lam + g * turb;
 }

@@ -156,6 +156,39 @@ TEST_CASE("nusselt: Gnielinski 2013 transition is continuous at both ends", "[nu
     CHECK(nu_of(TH_NU_GNIELINSKI_TRANSITION, c) == Approx(nu_of(TH_NU_GNIELINSKI, c)).epsilon(1e-14));
 }
 
+TEST_CASE("nusselt: Gnielinski 2013 transition fails rather than report a non-finite f", "[nusselt][bad]") {
+    // Source: the API contract (tubeheat.h: never NaN or infinity with a
+    // success code). The transition's Nu does not depend on the f it
+    // reports (f at the call's Re); found by the fuzzer (tests/fuzz): at a
+    // subnormal Re with a rough wall Colebrook's f is NaN, and Petukhov's
+    // f has a pole at Re = exp(1.64/0.790) ~ 7.97, while Nu stays finite.
+    th_conditions c = base(2.1833215891267875e-310, 2.2e-16);
+    c.l_over_d = 1e-300;
+    c.rel_roughness = 1e-4;
+    c.entry = TH_ENTRY_THERMAL;
+    c.length_factor = 0;  // (with it, Nu itself goes negative: an error anyway)
+    th_nusselt_result r{};
+    CHECK(th_nusselt(TH_NU_GNIELINSKI_TRANSITION, &c, &r) == TH_ERR_INPUT);
+    c = base(std::exp(1.64 / 0.790), 5.0);
+    c.l_over_d = 100.0;
+    for (double re = std::nextafter(c.re, 0.0), k = 0; k < 3; ++k, re = std::nextafter(re, 100.0)) {
+        c.re = re;
+        const int st = th_nusselt(TH_NU_GNIELINSKI_TRANSITION, &c, &r);
+        if (th_test::success(st)) {
+            CHECK(std::isfinite(r.nu));
+            CHECK(std::isfinite(r.f));
+        } else {
+            CHECK(st == TH_ERR_INPUT);
+        }
+    }
+    // In range nothing changes: f is Petukhov's at the call's Re.
+    c = base(5000.0, 5.0);
+    c.l_over_d = 100.0;
+    REQUIRE(th_test::success(th_nusselt(TH_NU_GNIELINSKI_TRANSITION, &c, &r)));
+    const double t = 0.790 * std::log(5000.0) - 1.64;  // Petukhov (1970)
+    CHECK(r.f == Approx(1.0 / (t * t)).epsilon(1e-15));
+}
+
 TEST_CASE("nusselt: automatic choice across the regime borders", "[nusselt][auto]") {
     // Source: thresholds of common practice, Re 2300 and 1e4 (tubeheat.h).
     th_nusselt_result r{};
