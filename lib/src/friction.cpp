@@ -89,11 +89,29 @@ double churchill(double re, double rr) {
 
 }  // namespace
 
+// What method M needs of the relative roughness alone, computed once per
+// th_friction_factor_array call (the rows share one pipe) and once per
+// single call: Haaland's (eps/D/3.7)^1.11 is a pow that a row would
+// otherwise pay again. The same expression either way, so a row equals the
+// single call bit for bit.
+struct roughness {
+    double rr = 0.0;
+    double haaland_term = 0.0;
+};
+template <int M>
+roughness roughness_of(double rr) {
+    roughness r;
+    r.rr = rr;
+    if constexpr (M == TH_F_HAALAND) r.haaland_term = std::pow(rr / 3.7, 1.11);
+    return r;
+}
+
 // Friction factor by method M; Range is range_check (the first violated
 // limit kept, for a single call) or range_flag (only whether one was, for
 // the array form).
 template <int M, class Range>
-double friction_of(double re, double rr, Range &rc) {
+double friction_of(double re, const roughness &rough, Range &rc) {
+    const double rr = rough.rr;
     if constexpr (M == TH_F_AUTO) {
         if (re < TH_RE_LAMINAR_MAX) return 64.0 / re;  // as TH_F_LAMINAR
         rc.require(re >= 4000.0, "transitional flow (2300 <= Re < 4000): "
@@ -116,7 +134,7 @@ double friction_of(double re, double rr, Range &rc) {
         rc.require(re <= 1e8, "Re above 1e8 (Haaland range 4e3..1e8)");
         rc.require(rr == 0.0 || (rr >= 1e-6 && rr <= 0.05),
                    "relative roughness outside Haaland range 1e-6..0.05");
-        const double t = -1.8 * std::log10(std::pow(rr / 3.7, 1.11) + 6.9 / re);
+        const double t = -1.8 * std::log10(rough.haaland_term + 6.9 / re);
         return 1.0 / (t * t);
     }
     if constexpr (M == TH_F_SWAMEE_JAIN) {
@@ -147,8 +165,8 @@ decltype(auto) with_friction_method(int method, Visit &&visit) {
 // The friction factor, and TH_ERR_INPUT unless it is finite and positive
 // (1/t^2 underflows to 0 when 6.9/Re overflows at a subnormal Re).
 template <int M, class Range>
-double friction_checked_of(double re, double rr, Range &rc) {
-    return positive_result(friction_of<M>(re, rr, rc));
+double friction_checked_of(double re, const roughness &rough, Range &rc) {
+    return positive_result(friction_of<M>(re, rough, rc));
 }
 
 // Method M for every row of th_friction_factor_array: the roughness was
@@ -158,24 +176,31 @@ template <int M>
 int friction_rows(std::size_t n, const double *re, double rr, int shared_status, double *f, int *status) {
     if (shared_status != TH_OK)
         return for_each_row(n, f, status, [&](std::size_t, double &) { return shared_status; });
+    const roughness rough = roughness_of<M>(rr);
     return for_each_row(n, f, status, [&](std::size_t i, double &value) {
         const double re_i = re[i];
         if (!positive_finite(re_i)) return int{TH_ERR_INPUT};
         return guard([&] {
             range_flag rc;
-            value = friction_checked_of<M>(re_i, rr, rc);
+            value = friction_checked_of<M>(re_i, rough, rc);
             return rc.status();
         });
     });
 }
 
 double friction(int method, double re, double rr, range_check &rc) {
-    return with_friction_method(method, [&](auto m) { return friction_of<decltype(m)::value>(re, rr, rc); });
+    return with_friction_method(method, [&](auto m) {
+        constexpr int M = decltype(m)::value;
+        return friction_of<M>(re, roughness_of<M>(rr), rc);
+    });
 }
 
 double friction_checked(int method, double re, double rr, range_check &rc) {
     return with_friction_method(method,
-                                [&](auto m) { return friction_checked_of<decltype(m)::value>(re, rr, rc); });
+                                [&](auto m) {
+                                    constexpr int M = decltype(m)::value;
+                                    return friction_checked_of<M>(re, roughness_of<M>(rr), rc);
+                                });
 }
 
 }  // namespace th
@@ -208,7 +233,8 @@ int th_friction_factor(int method, double re, double rel_roughness, double *f) {
         need(rel_roughness < 1.0);
         return th::with_friction_method(method, [&](auto m) {
             th::range_check rc;
-            *f = th::friction_checked_of<decltype(m)::value>(re, rel_roughness, rc);
+            constexpr int M = decltype(m)::value;
+            *f = th::friction_checked_of<M>(re, th::roughness_of<M>(rel_roughness), rc);
             return rc.status();
         });
     });
