@@ -97,7 +97,7 @@ void run_friction(benchmark::State &st, int method) {
 // th_friction_factor_array: one pipe per call, so one roughness for all
 // 256 rows (cycled through the same roughness values call by call).
 void run_friction_array(benchmark::State &st, int method) {
-    const auto &re = re_for(method);
+    const std::array<double, n_inputs> re = re_for(method);  // a local copy, as run_nusselt_array has
     const bool smooth = method == TH_F_LAMINAR || method == TH_F_PETUKHOV;
     std::array<double, n_inputs> f{};
     std::array<int, n_inputs> status{};
