@@ -7,6 +7,7 @@
 #define TUBEHEAT_LAMINAR_HPP
 
 #include "internal.hpp"
+#include "shared_terms.hpp"
 
 #include <cmath>
 
@@ -56,7 +57,7 @@ inline double nu_hausen(const th_conditions &c, Range &rc) {
 }
 
 template <class Range>
-inline double nu_sieder_tate_laminar(const th_conditions &c, Range &rc) {
+inline double nu_sieder_tate_laminar(const th_conditions &c, const shared_terms &terms, Range &rc) {
     // Sieder & Tate (1936): mean, uniform wall temperature, combined entry.
     laminar_detail::need_mean(c);
     need(std::isfinite(c.l_over_d));  // the correlation vanishes as L -> inf
@@ -65,7 +66,7 @@ inline double nu_sieder_tate_laminar(const th_conditions &c, Range &rc) {
     rc.require(c.mu_ratio > 0.0044 && c.mu_ratio < 9.75,
                "mu/mu_s outside Sieder-Tate laminar range 0.0044..9.75");
     rc.require(c.wall == TH_WALL_T, "Sieder-Tate laminar is for uniform wall temperature");
-    const double nu = 1.86 * std::cbrt(c.re * c.pr / c.l_over_d) * std::pow(c.mu_ratio, 0.14);
+    const double nu = 1.86 * std::cbrt(c.re * c.pr / c.l_over_d) * terms.mu_factor;
     rc.require(nu >= laminar_detail::nu_circle_t,
                "Sieder-Tate laminar below the developed value 3.66 (tube too long for it)");
     return nu;

@@ -172,7 +172,7 @@ double combined_entry(const th_conditions &c, Range &rc) {
 // method shares first, in this order: a circular-tube laminar fit used in a
 // duct, then a length below one diameter. Range: range_check or range_flag.
 template <int M, class Range>
-double compute(const th_conditions &c, Range &rc, double &f) {
+double compute(const th_conditions &c, const shared_terms &terms, Range &rc, double &f) {
     if constexpr (M != TH_NU_LAMINAR_DEVELOPED && (fields_read(M) & reads_duct) != 0)
         rc.require(c.duct == TH_DUCT_CIRCLE, "circular-tube laminar correlation applied to a non-circular duct");
     // No correlation or solution was fitted to, or validated on, a tube
@@ -181,17 +181,24 @@ double compute(const th_conditions &c, Range &rc, double &f) {
     rc.require(c.l_over_d >= 1.0, "L/D (or x/D) below 1: shorter than one diameter, beyond every method's data");
     if constexpr (M == TH_NU_LAMINAR_DEVELOPED) return laminar_developed(c, rc);
     if constexpr (M == TH_NU_DITTUS_BOELTER) return nu_dittus_boelter(c, rc);
-    if constexpr (M == TH_NU_SIEDER_TATE) return nu_sieder_tate(c, rc);
+    if constexpr (M == TH_NU_SIEDER_TATE) return nu_sieder_tate(c, terms, rc);
     if constexpr (M == TH_NU_PETUKHOV) return nu_petukhov(c, rc, f);
     if constexpr (M == TH_NU_GNIELINSKI) return nu_gnielinski(c, rc, f);
     if constexpr (M == TH_NU_GNIELINSKI_TRANSITION) return nu_gnielinski_transition(c, rc, f);
     if constexpr (M == TH_NU_HAUSEN) return nu_hausen(c, rc);
-    if constexpr (M == TH_NU_SIEDER_TATE_LAMINAR) return nu_sieder_tate_laminar(c, rc);
+    if constexpr (M == TH_NU_SIEDER_TATE_LAMINAR) return nu_sieder_tate_laminar(c, terms, rc);
     if constexpr (M == TH_NU_SHAH) return nu_shah(c, rc);
     if constexpr (M == TH_NU_GNIELINSKI_LAMINAR) return nu_gnielinski_laminar(c, rc);
     if constexpr (M == TH_NU_LIQUID_METAL) return nu_liquid_metal(c, rc);
     if constexpr (M == TH_NU_GRAETZ_EXACT) return graetz_exact(c, rc);
     if constexpr (M == TH_NU_COMBINED_ENTRY_NUMERIC) return combined_entry(c, rc);
+}
+
+// The shared terms method M uses (shared_terms.hpp), from fields validated
+// for it.
+template <int M>
+shared_terms terms_for(const th_conditions &c) {
+    return shared_terms_of(c, (fields_read(M) & reads_mu_ratio) != 0);
 }
 
 // Dispatch on a method id other than TH_NU_AUTO (which the caller resolves
@@ -276,7 +283,7 @@ int nusselt_method(const th_conditions &c, th_nusselt_result &out, const char *r
     validate<fields_read(M)>(c);
     range_check rc;
     double f = 0.0;
-    const double nu = positive_result(compute<M>(c, rc, f));
+    const double nu = positive_result(compute<M>(c, terms_for<M>(c), rc, f));
     out.nu = nu;
     out.method = M;
     out.method_name = used_name(M, c);
@@ -340,6 +347,7 @@ int nusselt_rows(const th_conditions &shared, std::size_t n, const row_columns &
     });
     if (shared_status != TH_OK)
         return for_each_row(n, nu, status, [&](std::size_t, double &) { return shared_status; });
+    const shared_terms terms = terms_for<M>(shared);
     th_conditions c = shared;
     return for_each_row(n, nu, status, [&](std::size_t i, double &value) {
         in.set(i, c);
@@ -350,7 +358,7 @@ int nusselt_rows(const th_conditions &shared, std::size_t n, const row_columns &
         return guard([&] {
             range_flag rc;
             double f = 0.0;
-            value = positive_result(compute<M>(c, rc, f));
+            value = positive_result(compute<M>(c, terms, rc, f));
             return rc.status();
         });
     });

@@ -62,12 +62,12 @@ inline double nu_dittus_boelter(const th_conditions &c, Range &rc) {
 }
 
 template <class Range>
-inline double nu_sieder_tate(const th_conditions &c, Range &rc) {
+inline double nu_sieder_tate(const th_conditions &c, const shared_terms &terms, Range &rc) {
     // Sieder & Tate (1936), turbulent.
     rc.require(c.re >= 1e4, "Re below 1e4 (Sieder-Tate range Re >= 1e4)");
     rc.require(c.pr >= 0.7 && c.pr <= 16700.0, "Pr outside Sieder-Tate range 0.7..16700");
     turbulent_detail::length_at_least_10d(c, rc, "L/D below 10 (Sieder-Tate needs developed flow)");
-    return 0.027 * std::pow(c.re, 0.8) * std::cbrt(c.pr) * std::pow(c.mu_ratio, 0.14);
+    return 0.027 * std::pow(c.re, 0.8) * std::cbrt(c.pr) * terms.mu_factor;
 }
 
 template <class Range>
