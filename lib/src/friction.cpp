@@ -229,14 +229,10 @@ int th_friction_factor(int method, double re, double rel_roughness, double *f) {
         need_out(f);
         if (method < 0 || method >= TH_F_METHOD_COUNT) fail(TH_ERR_METHOD);
         need_positive(re);
-        need_nonnegative(rel_roughness);
-        need(rel_roughness < 1.0);
-        return th::with_friction_method(method, [&](auto m) {
-            th::range_check rc;
-            constexpr int M = decltype(m)::value;
-            *f = th::friction_checked_of<M>(re, th::roughness_of<M>(rel_roughness), rc);
-            return rc.status();
-        });
+        th::need_rel_roughness(rel_roughness);
+        th::range_check rc;
+        *f = th::friction_checked(method, re, rel_roughness, rc);
+        return rc.status();
     });
 }
 
@@ -249,8 +245,7 @@ int th_friction_factor_array(int method, std::size_t n, const double *re, double
         // The roughness once; when it is bad every row fails, as
         // th_friction_factor fails each of them.
         const int shared_status = guard([&] {
-            need_nonnegative(rel_roughness);
-            need(rel_roughness < 1.0);
+            th::need_rel_roughness(rel_roughness);
             return TH_OK;
         });
         return th::with_friction_method(method, [&](auto m) {
@@ -282,8 +277,7 @@ int th_pressure_drop_mass_flow(int method, double mdot, double d, double length,
         need_positive(mdot);
         need_positive(d);
         need_nonnegative(length);
-        need_nonnegative(rel_roughness);
-        need(rel_roughness < 1.0);
+        th::need_rel_roughness(rel_roughness);
         need_positive(rho);
         need_positive(mu);
         constexpr double pi = boost::math::constants::pi<double>();

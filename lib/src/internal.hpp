@@ -76,6 +76,8 @@ inline void need_finite(double x) { need(finite(x)); }
 // Positive, or +infinity (used for "fully developed" lengths).
 inline void need_positive_or_inf(double x) { need(!std::isnan(x) && x > 0.0); }
 inline void need_temperature(double t) { need(finite(t) && t > 0.0); }
+// A relative roughness eps/D: 0 (smooth) up to, not including, 1.
+inline void need_rel_roughness(double rr) { need(finite(rr) && rr >= 0.0 && rr < 1.0); }
 
 // The same tests as plain expressions (nothing thrown), for the row
 // checks of the *_array functions.

@@ -117,7 +117,7 @@ void validate(const th_conditions &c) {
         need(c.entry == TH_ENTRY_THERMAL || c.entry == TH_ENTRY_COMBINED);
     if constexpr ((Read & reads_mu_ratio) != 0) need_positive(c.mu_ratio);
     if constexpr ((Read & reads_roughness) != 0)
-        need(std::isfinite(c.rel_roughness) && c.rel_roughness >= 0.0 && c.rel_roughness < 1.0);
+        need_rel_roughness(c.rel_roughness);
     if constexpr ((Read & reads_correction) != 0) {
         need(c.correction == TH_CORR_NONE || c.correction == TH_CORR_LIQUID ||
              c.correction == TH_CORR_GAS);

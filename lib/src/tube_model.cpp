@@ -81,7 +81,7 @@ section make_section(const th_tube_geometry &g, note_list &notes) {
     }
     s.length = g.length;
     s.rel_roughness = g.roughness / s.d_h;
-    need(s.rel_roughness < 1.0);
+    need_rel_roughness(s.rel_roughness);
     return s;
 }
 
