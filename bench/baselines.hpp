@@ -2,13 +2,16 @@
 // and the formulas written inline, one copy shared by the Google Benchmark
 // program (bench_core.cpp, CPU time) and the callgrind harness
 // (calc/instr_count.cpp, instructions), so that both compare the same
-// things.
+// things. Where the library keeps a formula as a function of its own,
+// without checks (friction_formulas.hpp, Gnielinski's laminar composite and
+// turbulent core), the baseline calls that function, inline: it cannot then
+// drift from the library's algebra. The formulas that live only inside a
+// checked correlation are written out here.
 #ifndef TUBEHEAT_BENCH_BASELINES_HPP
 #define TUBEHEAT_BENCH_BASELINES_HPP
 
 #include "tubeheat.h"
-
-#include <boost/math/special_functions/lambert_w.hpp>
+#include "turbulent.hpp"  // lib/src: the formula functions, inline
 
 #include <array>
 #include <cmath>
@@ -66,10 +69,7 @@ inline th_conditions conditions_for(rows kind, std::size_t i) {
 }
 
 // ---- baselines: the formulas inline --------------------------------------
-inline double petukhov_f(double re) {
-    const double t = 0.790 * std::log(re) - 1.64;
-    return 1.0 / (t * t);
-}
+using th::petukhov_f;
 inline double db_inline(const th_conditions &c) { return 0.023 * std::pow(c.re, 0.8) * std::pow(c.pr, 0.4); }
 inline double st_inline(const th_conditions &c) {
     return 0.027 * std::pow(c.re, 0.8) * std::cbrt(c.pr) * std::pow(c.mu_ratio, 0.14);
@@ -79,8 +79,7 @@ inline double petukhov_inline(const th_conditions &c) {
     return f8 * c.re * c.pr / (1.07 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
 }
 inline double gnielinski_inline(const th_conditions &c) {
-    const double f8 = petukhov_f(c.re) / 8.0;
-    return f8 * (c.re - 1000.0) * c.pr / (1.0 + 12.7 * std::sqrt(f8) * (std::pow(c.pr, 2.0 / 3.0) - 1.0));
+    return th::turbulent_detail::gnielinski_core(petukhov_f(c.re), c.re, c.pr, std::pow(c.pr, 2.0 / 3.0));
 }
 // Fully developed, circular, uniform wall temperature: a constant.
 inline double laminar_developed_inline(const th_conditions &) { return 3.6568; }
@@ -98,16 +97,11 @@ inline double shah_inline(const th_conditions &c) {
     const double cr = std::cbrt(xs);
     return xs <= 0.005 ? 1.615 / cr - 0.7 : (xs < 0.03 ? 1.615 / cr - 0.2 : 3.657 + 0.0499 / xs);
 }
-// Gnielinski's laminar mean composite, T, combined entry, from z =
-// Re Pr D/L and its cube root, the developing-velocity term cubed written
-// out (z (2 z/(1 + 22 Pr))^(1/2), as the library takes it).
-inline double gnielinski_laminar_sum(const th_conditions &c, double z, double cbrt_z) {
-    const double t2 = 1.615 * cbrt_z - 0.7;
-    return std::cbrt(3.66 * 3.66 * 3.66 + 0.7 * 0.7 * 0.7 + t2 * t2 * t2 + z * std::sqrt(2.0 * z / (1.0 + 22.0 * c.pr)));
-}
+// Gnielinski's laminar mean composite (T, combined entry: the conditions'
+// defaults).
 inline double gnielinski_laminar_inline(const th_conditions &c) {
     const double z = c.re * c.pr / c.l_over_d;
-    return gnielinski_laminar_sum(c, z, std::cbrt(z));
+    return th::laminar_detail::gnielinski_composite(c, z, std::cbrt(z), c.re / c.l_over_d);
 }
 // Gnielinski 2013: linear in Re between the laminar composite at 2300 and
 // the turbulent value (with its length factor) at 1e4, the roots shared as
@@ -116,9 +110,10 @@ inline double gnielinski_laminar_inline(const th_conditions &c) {
 inline double gnielinski_transition_inline(const th_conditions &c) {
     const double g = (c.re - 2300.0) / 7700.0;
     const double cbrt_pr = std::cbrt(c.pr), cbrt_dl = 1.0 / std::cbrt(c.l_over_d);
-    const double lam = gnielinski_laminar_sum(c, 2300.0 * c.pr / c.l_over_d, std::cbrt(2300.0) * cbrt_pr * cbrt_dl);
-    const double f8 = petukhov_f(1e4) / 8.0;
-    const double turb = f8 * (1e4 - 1000.0) * c.pr / (1.0 + 12.7 * std::sqrt(f8) * (cbrt_pr * cbrt_pr - 1.0)) *
+    const double lam = th::laminar_detail::gnielinski_composite(c, 2300.0 * c.pr / c.l_over_d,
+                                                                std::cbrt(2300.0) * cbrt_pr * cbrt_dl,
+                                                                2300.0 / c.l_over_d);
+    const double turb = th::turbulent_detail::gnielinski_core(petukhov_f(1e4), 1e4, c.pr, cbrt_pr * cbrt_pr) *
                         (1.0 + cbrt_dl * cbrt_dl);
     return (1.0 - g) * lam + g * turb;
 }
@@ -132,20 +127,9 @@ inline double swamee_jain_inline(double re, double rr) {
     const double t = std::log10(rr / 3.7 + 5.74 / std::pow(re, 0.9));
     return 0.25 / (t * t);
 }
-// Churchill (1977), the integer powers by repeated squaring and (A+B)^-1.5
-// as 1/(s sqrt s), as the library evaluates it for Re >= 1e-8 (all the
-// inputs here): the baseline of the overhead ratio.
-inline double churchill_inline(double re, double rr) {
-    const double inv_re = 1.0 / re;
-    const double t = -2.457 * std::log(std::pow(7.0 * inv_re, 0.9) + 0.27 * rr);
-    const double t2 = t * t, t4 = t2 * t2, t8 = t4 * t4;
-    const double q = 37530.0 * inv_re;
-    const double q2 = q * q, q4 = q2 * q2, q8 = q4 * q4;
-    const double s = t8 * t8 + q8 * q8;
-    const double r = 8.0 * inv_re;
-    const double r2 = r * r, r4 = r2 * r2;
-    return 8.0 * std::pow(r4 * r4 * r4 + 1.0 / (s * std::sqrt(s)), 1.0 / 12.0);
-}
+// Churchill (1977) as the library evaluates it (repeated squaring): the
+// baseline of the overhead ratio.
+inline double churchill_inline(double re, double rr) { return th::churchill(re, rr); }
 // Churchill as usually typed, the powers as written: what a spreadsheet
 // formula costs (a second reference, not the ratio's baseline).
 inline double churchill_pow_inline(double re, double rr) {
@@ -155,24 +139,9 @@ inline double churchill_pow_inline(double re, double rr) {
 }
 inline double petukhov_friction_inline(double re, double) { return petukhov_f(re); }
 inline double laminar_friction_inline(double re, double) { return 64.0 / re; }
-// Colebrook exactly, as the library takes it: Lambert W (Boost.Math) where
-// e^z is representable, else w + ln w = z in log space (the rough tubes at
-// high Re among the inputs): the baseline of the overhead ratio.
-inline double colebrook_lambert_w_inline(double re, double rr) {
-    const double c = 2.0 / std::log(10.0);
-    const double b = 2.51 / re;
-    const double z = rr / 3.7 / (b * c) - std::log(b * c);
-    double w;
-    if (z < 700.0) {
-        w = boost::math::lambert_w0(std::exp(z));
-    } else {
-        const double l2 = std::log(z);
-        w = z - l2 + l2 / z + l2 * (l2 - 2.0) / (2.0 * z * z) + l2 * (6.0 - 9.0 * l2 + 2.0 * l2 * l2) / (6.0 * z * z * z);
-        w -= (w + std::log(w) - z) / (1.0 + 1.0 / w);
-    }
-    const double inv_sqrt_f = -c * std::log(b * c * w);
-    return 1.0 / (inv_sqrt_f * inv_sqrt_f);
-}
+// Colebrook exactly, as the library solves it (Lambert W): the baseline of
+// the overhead ratio.
+inline double colebrook_lambert_w_inline(double re, double rr) { return th::colebrook(re, rr); }
 // Colebrook, second reference: the classic fixed-point iteration (what a spreadsheet
 // user would otherwise type), to 1e-12 relative.
 inline double colebrook_iterative(double re, double rr) {
@@ -190,6 +159,9 @@ inline const std::array<double, n_inputs> &re_for(int method) {
     return method == TH_F_LAMINAR ? in.re_lam : in.re;
 }
 inline bool smooth_only(int method) { return method == TH_F_LAMINAR || method == TH_F_PETUKHOV; }
+// The relative roughness of input i for a friction method (0 for the
+// smooth-tube ones).
+inline double rr_for(int method, std::size_t i) { return smooth_only(method) ? 0.0 : in.rr[i]; }
 
 }  // namespace th_bench
 

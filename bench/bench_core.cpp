@@ -83,11 +83,10 @@ void run_inline_f_laminar(benchmark::State &st, double (*f)(double, double)) {
 
 void run_friction(benchmark::State &st, int method) {
     const auto &re = re_for(method);
-    const bool smooth = method == TH_F_LAMINAR || method == TH_F_PETUKHOV;
     double f = 0.0;
     std::size_t i = 0;
     for (auto _ : st) {
-        benchmark::DoNotOptimize(th_friction_factor(method, re[i], smooth ? 0.0 : in.rr[i], &f));
+        benchmark::DoNotOptimize(th_friction_factor(method, re[i], rr_for(method, i), &f));
         benchmark::DoNotOptimize(f);
         i = (i + 1) % n_inputs;
     }
@@ -98,12 +97,11 @@ void run_friction(benchmark::State &st, int method) {
 // 256 rows (cycled through the same roughness values call by call).
 void run_friction_array(benchmark::State &st, int method) {
     const std::array<double, n_inputs> re = re_for(method);  // a local copy, as run_nusselt_array has
-    const bool smooth = method == TH_F_LAMINAR || method == TH_F_PETUKHOV;
     std::array<double, n_inputs> f{};
     std::array<int, n_inputs> status{};
     std::size_t i = 0;
     for (auto _ : st) {
-        benchmark::DoNotOptimize(th_friction_factor_array(method, n_inputs, re.data(), smooth ? 0.0 : in.rr[i],
+        benchmark::DoNotOptimize(th_friction_factor_array(method, n_inputs, re.data(), rr_for(method, i),
                                                           f.data(), status.data()));
         benchmark::ClobberMemory();
         i = (i + 1) % n_inputs;

@@ -74,29 +74,26 @@ void nu_array(int method, const std::array<th_conditions, n_inputs> &cs) {
 template <double (*F)(double, double)>
 void f_inline(int method) {
     const auto &re = re_for(method);
-    const bool smooth = smooth_only(method);
     double s = 0.0;
-    for (int k = 0; k < n_rows; ++k) s += F(re[k % n_inputs], smooth ? 0.0 : in.rr[k % n_inputs]);
+    for (int k = 0; k < n_rows; ++k) s += F(re[k % n_inputs], rr_for(method, k % n_inputs));
     sink = s;
 }
 void f_api(int method) {
     const auto &re = re_for(method);
-    const bool smooth = smooth_only(method);
     double s = 0.0, f = 0.0;
     for (int k = 0; k < n_rows; ++k) {
-        th_friction_factor(method, re[k % n_inputs], smooth ? 0.0 : in.rr[k % n_inputs], &f);
+        th_friction_factor(method, re[k % n_inputs], rr_for(method, k % n_inputs), &f);
         s += f;
     }
     sink = s;
 }
 void f_array(int method) {
     const auto &re = re_for(method);
-    const bool smooth = smooth_only(method);
     static double f[n_inputs];
     static int status[n_inputs];
     double s = 0.0;
     for (int k = 0; k < n_rows / static_cast<int>(n_inputs); ++k) {
-        th_friction_factor_array(method, n_inputs, re.data(), smooth ? 0.0 : in.rr[k % n_inputs], f, status);
+        th_friction_factor_array(method, n_inputs, re.data(), rr_for(method, k % n_inputs), f, status);
         s += f[k % n_inputs];
     }
     sink = s;

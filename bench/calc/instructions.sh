@@ -15,7 +15,7 @@ out="$build/perf"
 mkdir -p "$out"
 cmake -S . -B "$build" -DCMAKE_BUILD_TYPE=Release -DCMAKE_CXX_FLAGS=-g >/dev/null
 cmake --build "$build" -j2 --target tubeheat >/dev/null
-c++ -std=c++17 -O2 -Wall -Wextra -I lib/include -I bench bench/calc/instr_count.cpp -L"$build/lib" \
+c++ -std=c++17 -O2 -Wall -Wextra -I lib/include -I lib/src -I bench bench/calc/instr_count.cpp -L"$build/lib" \
    -Wl,-rpath,"$PWD/$build/lib" -ltubeheat -o "$out/instr_count"
 valgrind --tool=callgrind --callgrind-out-file="$out/callgrind.out" "$out/instr_count" \
   >/dev/null 2>"$out/callgrind.log"
